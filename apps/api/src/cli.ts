@@ -1,0 +1,81 @@
+// `npm run railyard -- import <file> --board <slug> ...`: imports a netlist from the command line.
+import { Command, Option } from 'commander';
+import { boardSlugSchema, netlistFormats, type ImportIssue } from '@railyard/shared';
+import { createServices } from './app';
+import { createPool } from './db/client';
+import { AppError } from './lib/app-error';
+import { createLogger } from './lib/logger';
+import { importFromDisk } from './modules/imports/import-files';
+
+function printIssues(label: string, issues: ImportIssue[]) {
+  for (const i of issues) {
+    const where = [i.file, i.line !== null ? `line ${i.line}` : null, i.field ? `field ${i.field}` : null]
+      .filter(Boolean)
+      .join(', ');
+    console.error(`${label}${where ? ` (${where})` : ''}: ${i.message}`);
+  }
+}
+
+const program = new Command('railyard').description('Railyard command-line tools');
+
+program
+  .command('import')
+  .description('import a board netlist (IPC-D-356, pin-list CSV or railyard-board JSON)')
+  .argument('<file>', 'the netlist file')
+  .requiredOption('--board <slug>', 'the board slug (lower-case letters, digits and hyphens)')
+  .addOption(new Option('--format <format>', 'the netlist format (detected when omitted)').choices(netlistFormats))
+  .option('--parts <file>', 'a parts CSV (refdes,value,package) adding values and packages')
+  .option('--annotations <file>', 'a railyard-annotations JSON file (voltages, converter and switch links)')
+  .option('--title <title>', 'the board title, for a new board')
+  .option('--replace', "replace the board's netlist, keeping entered annotations whose nets still exist", false)
+  .action(async (file: string, opts) => {
+    const slug = boardSlugSchema.safeParse(opts.board);
+    if (!slug.success) {
+      console.error(`--board "${opts.board}": ${slug.error.issues[0]?.message}`);
+      process.exitCode = 2;
+      return;
+    }
+    const databaseUrl = process.env.DATABASE_URL;
+    if (!databaseUrl) {
+      console.error('DATABASE_URL is not set (npm run railyard sets it for the local cluster).');
+      process.exitCode = 2;
+      return;
+    }
+    const pool = createPool(databaseUrl);
+    const services = createServices({ pool, logger: createLogger('warn') });
+    try {
+      const job = await importFromDisk(services.imports, {
+        slug: slug.data,
+        format: opts.format,
+        replace: opts.replace,
+        meta: opts.title ? { title: opts.title } : undefined,
+        netlist: file,
+        parts: opts.parts,
+        annotations: opts.annotations,
+        enteredBy: 'import:cli',
+      });
+      printIssues('warning', job.warnings);
+      if (job.status !== 'succeeded' || !job.summary) {
+        printIssues('error', job.errors);
+        process.exitCode = 1;
+        return;
+      }
+      const s = job.summary;
+      console.log(
+        `${s.replaced ? 'Replaced' : 'Imported'} ${slug.data}: ${s.nets} nets, ${s.components} components, ` +
+          `${s.pins} pins, ${s.powerLinks} power links; root ${s.rootNet ?? '(none)'}; ground ${s.groundNets.join(', ') || '(none)'}`,
+      );
+      for (const d of s.dropped) console.log(`dropped: ${d}`);
+    } catch (error) {
+      if (!(error instanceof AppError)) throw error;
+      console.error(error.message);
+      const details = error.details as { errors?: ImportIssue[]; warnings?: ImportIssue[] } | undefined;
+      printIssues('error', details?.errors ?? []);
+      printIssues('warning', details?.warnings ?? []);
+      process.exitCode = 1;
+    } finally {
+      await pool.end();
+    }
+  });
+
+await program.parseAsync();

@@ -1,0 +1,3 @@
+export * from './enums';
+export * from './boards';
+export * from './imports';

@@ -1,0 +1,10 @@
+import pino from 'pino';
+
+export function createLogger(level: string) {
+  return pino({
+    level,
+    redact: { paths: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'], remove: true },
+  });
+}
+
+export type Logger = ReturnType<typeof createLogger>;

@@ -1,0 +1,46 @@
+import type { BoardDetail } from '@railyard/shared';
+import { AppError } from '../../lib/app-error';
+import type { BoardsRepository } from './boards.repository';
+
+export function createBoardsService(repo: BoardsRepository) {
+  async function requireBoard(slug: string) {
+    const board = await repo.findBoard(slug);
+    if (!board) throw AppError.notFound(`Board "${slug}"`);
+    return board;
+  }
+
+  return {
+    listBoards: () => repo.listBoards(),
+
+    async getBoard(slug: string): Promise<BoardDetail> {
+      const { id, ...summary } = await requireBoard(slug);
+      const counts = await repo.countsByKind(id);
+      return {
+        ...summary,
+        netKindCounts: { power: 0, ground: 0, signal: 0, ...counts.netKindCounts },
+        componentKindCounts: counts.componentKindCounts,
+        powerLinkCount: counts.powerLinkCount,
+      };
+    },
+
+    async listNets(slug: string) {
+      const board = await requireBoard(slug);
+      return { board: board.slug, nets: await repo.listNets(board.id) };
+    },
+
+    async listComponents(slug: string, netName: string | undefined) {
+      const board = await requireBoard(slug);
+      let netId: number | null = null;
+      let net: string | null = null;
+      if (netName !== undefined) {
+        const found = await repo.findNet(board.id, netName);
+        if (!found) throw AppError.notFound(`Net "${netName}" on board "${slug}"`);
+        netId = found.id;
+        net = found.name;
+      }
+      return { board: board.slug, net, components: await repo.listComponents(board.id, netId) };
+    },
+  };
+}
+
+export type BoardsService = ReturnType<typeof createBoardsService>;

@@ -1,0 +1,71 @@
+import { Suspense } from 'react';
+import {
+  Link,
+  NavLink,
+  Outlet,
+  ScrollRestoration,
+  useLocation,
+  useNavigation,
+} from 'react-router-dom';
+import { paths } from '../../config/paths';
+import { PageLoading } from './page-loading';
+import { ThemeToggle } from './theme-toggle';
+import { Wordmark } from './wordmark';
+
+function navClass(isActive: boolean) {
+  return `rounded-md px-2.5 py-1 text-[13px] font-medium ${
+    isActive ? 'bg-raised text-ink' : 'text-ink-muted hover:text-ink'
+  }`;
+}
+
+export function AppShell() {
+  const navigation = useNavigation();
+  const { pathname } = useLocation();
+  // The home page is the board list, so "Boards" is lit there too.
+  const onBoards = pathname === paths.home.path;
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a
+        href="#main"
+        className="sr-only z-50 rounded bg-accent px-3 py-1.5 text-accent-ink focus:not-sr-only focus:fixed focus:top-2 focus:left-2"
+      >
+        Skip to content
+      </a>
+      <header className="sticky top-0 z-30 border-b border-line bg-surface/95 backdrop-blur">
+        <div className="flex h-11 items-center gap-4 px-4">
+          <Link to={paths.home.getHref()} aria-label="Railyard, all boards" className="rounded">
+            <Wordmark />
+          </Link>
+          <nav aria-label="Main" className="flex items-center gap-1">
+            <NavLink
+              to={paths.boards.getHref()}
+              className={({ isActive }) => navClass(isActive || onBoards)}
+            >
+              Boards
+            </NavLink>
+            <NavLink
+              to={paths.newBoardImport.getHref()}
+              className={({ isActive }) => navClass(isActive)}
+            >
+              Import
+            </NavLink>
+          </nav>
+          <div className="ml-auto">
+            <ThemeToggle />
+          </div>
+        </div>
+        {navigation.state !== 'idle' && (
+          <div className="absolute inset-x-0 -bottom-px h-0.5 overflow-hidden" role="presentation">
+            <div className="animate-sweep h-full w-1/3 bg-accent" />
+          </div>
+        )}
+      </header>
+      <main id="main" className="flex-1" tabIndex={-1}>
+        <Suspense fallback={<PageLoading />}>
+          <Outlet />
+        </Suspense>
+      </main>
+      <ScrollRestoration />
+    </div>
+  );
+}

@@ -1,0 +1,22 @@
+import { QueryClient } from '@tanstack/react-query';
+import { isApiError } from './api-client';
+
+/** A 4xx will answer the same way a second time; only network trouble and 5xx are retried. */
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (isApiError(error) && error.status >= 400 && error.status < 500) return false;
+  return failureCount < 2;
+}
+
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        // Board data changes only through an import, which invalidates what it touched.
+        staleTime: 60_000,
+        refetchOnWindowFocus: false,
+        retry: shouldRetry,
+      },
+      mutations: { retry: false },
+    },
+  });
+}

@@ -1,0 +1,4 @@
+export * from './board';
+export * from './board-file';
+export * from './import';
+export * from './api-error';

@@ -1,0 +1,44 @@
+// Browser tests drive Debian's Chromium through playwright-core; no browser is ever downloaded.
+import { existsSync } from 'node:fs';
+import type { AddressInfo } from 'node:net';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { chromium, type Browser } from 'playwright-core';
+import { createTestApp } from './test-app';
+
+const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+
+export function chromiumPath(): string {
+  const candidates = [process.env.CHROMIUM_PATH, '/usr/bin/chromium'].filter((p): p is string => Boolean(p));
+  const found = candidates.find((p) => existsSync(p));
+  if (!found) throw new Error('Chromium not found: install Debian\'s chromium package (npm test does it)');
+  return found;
+}
+
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: chromiumPath(),
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+/** The real app with the built client, listening on an ephemeral loopback port. */
+export async function startWebServer() {
+  const staticDir = process.env.RAILYARD_WEB_DIST ?? path.join(repoRoot, 'dist/web');
+  if (!existsSync(path.join(staticDir, 'index.html'))) {
+    throw new Error(`The built client is missing at ${staticDir}: run \`npx vite build\` (npm test does it)`);
+  }
+  const test = createTestApp({ STATIC_DIR: staticDir });
+  const server = await new Promise<import('node:http').Server>((resolve) => {
+    const s = test.app.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const { port } = server.address() as AddressInfo;
+  return {
+    ...test,
+    baseUrl: `http://127.0.0.1:${port}`,
+    async stop() {
+      await new Promise((r) => server.close(r));
+      await test.close();
+    },
+  };
+}
