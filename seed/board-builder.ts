@@ -71,8 +71,7 @@ const maxTries = 4000;
 
 export class BoardBuilder {
   readonly components: DemoComponent[] = [];
-  /** Pins placed so far; kept as a running total because generators ask for it after every part. */
-  pinTotal = 0;
+  private placedPins = 0;
   private readonly counters = new Map<string, number>();
   private readonly columns: number;
   private readonly rowsCount: number;
@@ -94,6 +93,11 @@ export class BoardBuilder {
       top: new Uint8Array(this.columns * this.rowsCount),
       bottom: new Uint8Array(this.columns * this.rowsCount),
     };
+  }
+
+  /** Pins placed so far, kept as a running total because generators ask after every part. */
+  get pinTotal(): number {
+    return this.placedPins;
   }
 
   /**
@@ -162,7 +166,7 @@ export class BoardBuilder {
     for (const p of component.pins)
       if (p.net !== null && !this.netHomes.has(p.net)) this.netHomes.set(p.net, centre);
     this.components.push(component);
-    this.pinTotal += component.pins.length;
+    this.placedPins += component.pins.length;
     return component;
   }
 

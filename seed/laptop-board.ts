@@ -86,7 +86,7 @@ const converters: readonly ConverterSpec[] = [
   { rail: 'VCC_0V8_S5', volts: 0.8, input: 'VCC_3V3_S5', topology: 'buck', at: { x: 50, y: 75 }, description: 'Always-on logic of the processor platform hub.' },
   { rail: 'VDD_CORE', volts: 1.0, input: 'VSYS', topology: 'multiphase', phases: 3, at: { x: 150, y: 118 }, description: 'Processor core rail, three phases. Reads a few ohms to ground on good boards; compare with a known-good board.' },
   { rail: 'VDD_GFX', volts: 0.9, input: 'VSYS', topology: 'multiphase', phases: 2, at: { x: 118, y: 118 }, description: 'Integrated graphics rail, two phases.' },
-  { rail: 'VDD_SA', volts: 1.05, input: 'VSYS', topology: 'buck', at: { x: 100, y: 75 } },
+  { rail: 'VDD_FABRIC', volts: 1.05, input: 'VSYS', topology: 'buck', at: { x: 100, y: 75 } },
   { rail: 'VCC_1V05_S0', volts: 1.05, input: 'VSYS', topology: 'buck', at: { x: 100, y: 50 } },
   { rail: 'VDD1_MEM', volts: 1.8, input: 'VSYS', topology: 'buck', at: { x: 72, y: 50 } },
   { rail: 'VDD2_MEM', volts: 1.05, input: 'VSYS', topology: 'buck', at: { x: 72, y: 75 }, description: 'Memory core rail shared by the processor memory PHY and the four DRAM packages.' },
@@ -270,7 +270,7 @@ class LaptopWorld {
     this.rail(
       'VSYS',
       11.55,
-      'Main system rail from the narrow-VDC charger; feeds every first-level converter.',
+      'Main system rail from the charger; feeds every first-level converter.',
       ['SYS_MAIN'],
     );
     this.rail(
@@ -279,7 +279,7 @@ class LaptopWorld {
       'Battery pack positive after the battery current-sense resistor; joined to VSYS by the battery FET.',
     );
     this.rail('VBAT_PACK', 11.55, 'Battery connector positive.');
-    this.rail('CHG_REGN', 6.0, 'Charger gate-drive regulator output.');
+    this.rail('CHG_DRV', 6.0, 'Charger gate-drive regulator output.');
     this.rail('EC_VCORE', 1.2, 'Embedded controller core, from its internal regulator.');
     this.rail('LX_BL', null, 'Switch node of the backlight boost; not a DC rail.');
     this.rail('VBL_LED', 30.0, 'Panel backlight LED string supply from the boost.');
@@ -390,20 +390,20 @@ class LaptopWorld {
     const charger = this.part({
       prefix: 'U',
       kind: 'ic',
-      value: 'NVDC CHARGER 3S',
+      value: 'BUCK-BOOST CHARGER 3S',
       footprint: quadFlat('QFN-32', 8, 0.4, 4.0, true),
       // prettier-ignore
       nets: [
-        'VIN_CHG', 'VIN_CHG', 'VIN_SNS', 'ADP_GATE', 'ACDET', 'CHG_ILIM', 'SMB_CLK', 'SMB_DAT',
-        'CHG_REGN', 'CHG_BTST', 'LX_CHG', 'LX_CHG', 'GND', 'GND', 'VSYS', 'VSYS',
-        'BATFET_GATE', 'VBAT', 'VBAT_PACK', 'BATT_NTC', 'CHG_PROCHOT_N', 'CHG_OK', 'CHG_IADPT', 'CHG_IBAT',
-        'GND', 'VCC_3V3_EC', null, null, 'CHG_CMPIN', 'CHG_CMPOUT', null, 'GND',
+        'VIN_CHG', 'VIN_CHG', 'VIN_SNS', 'ADP_GATE', 'ADP_DET', 'CHG_ILIM', 'SMB_CLK', 'SMB_DAT',
+        'CHG_DRV', 'CHG_BOOT', 'LX_CHG', 'LX_CHG', 'GND', 'GND', 'VSYS', 'VSYS',
+        'BATFET_GATE', 'VBAT', 'VBAT_PACK', 'BATT_NTC', 'CHG_THROTTLE_N', 'CHG_OK', 'CHG_IIN_MON', 'CHG_IBAT_MON',
+        'GND', 'VCC_3V3_EC', null, null, 'CHG_CMP_IN', 'CHG_CMP_OUT', null, 'GND',
         'GND',
       ],
       place: this.top({ x: 40, y: 38 }),
     });
     b.link('VIN_CHG', 'LX_CHG', charger, 'converter');
-    b.link('VIN_CHG', 'CHG_REGN', charger, 'converter');
+    b.link('VIN_CHG', 'CHG_DRV', charger, 'converter');
     this.two(
       'L',
       'inductor',
@@ -413,22 +413,22 @@ class LaptopWorld {
       'VSYS',
       this.top({ x: 48, y: 30 }),
     );
-    this.two('C', 'capacitor', '47nF/25V', c0402, 'CHG_BTST', 'LX_CHG', this.top({ x: 40, y: 38 }));
+    this.two('C', 'capacitor', '47nF/25V', c0402, 'CHG_BOOT', 'LX_CHG', this.top({ x: 40, y: 38 }));
     this.caps('VIN_CHG', this.top({ x: 36, y: 34 }), [
       [4, '10uF/25V', c0805],
       [1, '100nF/25V', c0402],
     ]);
-    this.caps('CHG_REGN', this.top({ x: 40, y: 38 }), [[1, '2u2/10V', c0402]]);
+    this.caps('CHG_DRV', this.top({ x: 40, y: 38 }), [[1, '2u2/10V', c0402]]);
     this.caps('VSYS', this.top({ x: 52, y: 36 }), [
       [6, '10uF/25V', c0805],
       [2, '100nF/25V', c0402],
     ]);
     for (const [net, value] of [
       ['CHG_ILIM', '100K'],
-      ['ACDET', '150K'],
-      ['CHG_IADPT', '100K'],
-      ['CHG_IBAT', '100K'],
-      ['CHG_CMPIN', '100K'],
+      ['ADP_DET', '150K'],
+      ['CHG_IIN_MON', '100K'],
+      ['CHG_IBAT_MON', '100K'],
+      ['CHG_CMP_IN', '100K'],
     ] as const) {
       this.two('R', 'resistor', value, c0201, net, 'GND', this.top({ x: 40, y: 38 }, 4));
     }
@@ -437,7 +437,7 @@ class LaptopWorld {
       'resistor',
       '10K',
       c0201,
-      'CHG_PROCHOT_N',
+      'CHG_THROTTLE_N',
       'VCC_3V3_EC',
       this.top({ x: 40, y: 38 }, 4),
     );
@@ -447,7 +447,7 @@ class LaptopWorld {
       'resistor',
       '10K',
       c0201,
-      'CHG_CMPOUT',
+      'CHG_CMP_OUT',
       'VCC_3V3_EC',
       this.top({ x: 40, y: 38 }, 4),
     );
@@ -616,7 +616,7 @@ class LaptopWorld {
         nets: padNets(
           // prettier-ignore
           [
-            'VCC_5V0_S5', 'GND', enable, good, feedback, `${spec.rail}_SENSE_N`, 'SVID_CLK', 'SVID_DATA', 'SVID_ALERT_N',
+            'VCC_5V0_S5', 'GND', enable, good, feedback, `${spec.rail}_SENSE_N`, 'VR_CLK', 'VR_DATA', 'VR_ALERT_N',
             'VCC_3V3_S5', 'VSYS',
             ...range(phases).flatMap((i) => [`${spec.rail}_PWM${i + 1}`, `${spec.rail}_CS${i + 1}`]),
           ],
@@ -837,7 +837,7 @@ class LaptopWorld {
       'SPI_CLK', 'SPI_MOSI', 'SPI_MISO', 'SPI_CS0_N', 'SPI_CS1_N', 'SPI_WP_N',
       'ESPI_CLK', 'ESPI_CS_N', 'ESPI_IO0', 'ESPI_IO1', 'ESPI_IO2', 'ESPI_IO3', 'ESPI_RST_N', 'ESPI_ALERT_N',
       'SMB_CLK', 'SMB_DAT', 'I2C_TP_SCL', 'I2C_TP_SDA', 'TP_INT_N',
-      'SVID_CLK', 'SVID_DATA', 'SVID_ALERT_N', 'CPU_PROCHOT_N', 'PLT_RST_N', 'PWR_BTN_N', 'SLP_S3_N', 'SLP_S4_N', 'RSMRST_N',
+      'VR_CLK', 'VR_DATA', 'VR_ALERT_N', 'CPU_THROTTLE_N', 'SYS_RST_N', 'PWR_BTN_N', 'SUSPEND_N', 'HIBERNATE_N', 'AON_RST_N',
       'XTAL_38M_IN', 'XTAL_38M_OUT', 'RTC_X1', 'RTC_X2', 'BL_PWM', 'BL_EN', 'EDP_VDD_EN', 'CAM_RST_N', 'CAM_MCLK',
       'MIPI_CSI_CK_P', 'MIPI_CSI_CK_N', 'MIPI_CSI_D0_P', 'MIPI_CSI_D0_N', 'MIPI_CSI_D1_P', 'MIPI_CSI_D1_N', 'CAM_I2C_SCL', 'CAM_I2C_SDA',
       ...range(60).map((i) => `CPU_GPIO${i}`),
@@ -846,7 +846,7 @@ class LaptopWorld {
     const cpu = this.bga('CPU 14-CORE', { x: 150, y: 72 }, 0.65, 1850, signals, [
       ['VDD_CORE', 260],
       ['VDD_GFX', 160],
-      ['VDD_SA', 50],
+      ['VDD_FABRIC', 50],
       ['VCC_1V05_S0', 40],
       ['VDD2_MEM', 24],
       ['VDDQ_MEM', 40],
@@ -917,7 +917,7 @@ class LaptopWorld {
       'CLK_DGPU_P',
       'CLK_DGPU_N',
       'CLKREQ_DGPU_N',
-      'PLT_RST_N',
+      'SYS_RST_N',
       'SMB_CLK',
       'SMB_DAT',
       'DGPU_PWR_EN',
@@ -999,7 +999,7 @@ class LaptopWorld {
     // prettier-ignore
     const ecSignals = [
       'ESPI_CLK', 'ESPI_CS_N', 'ESPI_IO0', 'ESPI_IO1', 'ESPI_IO2', 'ESPI_IO3', 'ESPI_RST_N', 'ESPI_ALERT_N',
-      'SMB_CLK', 'SMB_DAT', 'PWR_BTN_N', 'SLP_S3_N', 'SLP_S4_N', 'RSMRST_N', 'CHG_OK', 'CHG_PROCHOT_N', 'ACDET', 'CPU_PROCHOT_N',
+      'SMB_CLK', 'SMB_DAT', 'PWR_BTN_N', 'SUSPEND_N', 'HIBERNATE_N', 'AON_RST_N', 'CHG_OK', 'CHG_THROTTLE_N', 'ADP_DET', 'CPU_THROTTLE_N',
       ...converters.map((c) => `${c.rail}_EN`),
       ...switches.map((s) => `${s.rail}_EN`),
       'VCC_5V0_S5_PG', 'VCC_3V3_S5_PG', 'VDD_CORE_PG', 'VDD_GFX_PG', 'VDD2_MEM_PG',
@@ -1093,7 +1093,7 @@ class LaptopWorld {
           'SPI_MOSI',
           'SPI_MISO',
           'SPI_CS1_N',
-          'PLT_RST_N',
+          'SYS_RST_N',
           'TPM_IRQ_N',
           'VCC_3V3_S0',
           'VCC_3V3_S0',
@@ -1205,7 +1205,7 @@ class LaptopWorld {
         `CLK_${clock}_P`,
         `CLK_${clock}_N`,
         `CLKREQ_${clock}_N`,
-        'PLT_RST_N',
+        'SYS_RST_N',
         'SMB_CLK',
         'SMB_DAT',
       ];

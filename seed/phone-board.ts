@@ -239,7 +239,7 @@ function declareRails(b: BoardBuilder): void {
   b.rail('USB_VBUS', 5.0, 'USB VBUS after the input fuse, clamped by the TVS.');
   b.rail('CHG_VIN', 5.0, 'Charger input after the over-voltage protection FET.');
   b.rail(
-    'CHG_REGN',
+    'CHG_DRV',
     5.0,
     'Charger internal regulator output, biases the gate drivers and the battery NTC divider.',
   );
@@ -411,8 +411,8 @@ function usbAndCharger(b: BoardBuilder): void {
     nets: ballMap(chargerFootprint, {
       // prettier-ignore
       signals: [
-        'I2C0_SCL', 'I2C0_SDA', 'CHG_INT_N', 'CHG_OVP_GATE', 'BATFET_GATE', 'CHG_BTST', 'BATT_NTC', 'BATT_ID',
-        'USB_DP', 'USB_DN', 'CHG_ILIM', 'CHG_REGN', 'CHG_REGN',
+        'I2C0_SCL', 'I2C0_SDA', 'CHG_INT_N', 'CHG_OVP_GATE', 'BATFET_GATE', 'CHG_BOOT', 'BATT_NTC', 'BATT_ID',
+        'USB_DP', 'USB_DN', 'CHG_ILIM', 'CHG_DRV', 'CHG_DRV',
       ],
       power: [
         ['CHG_VIN', 6],
@@ -426,7 +426,7 @@ function usbAndCharger(b: BoardBuilder): void {
     place: top(chargerAt),
   });
   b.link('CHG_VIN', 'LX_CHG', charger, 'converter');
-  b.link('CHG_VIN', 'CHG_REGN', charger, 'converter');
+  b.link('CHG_VIN', 'CHG_DRV', charger, 'converter');
   b.twoPin(
     'L',
     'inductor',
@@ -436,18 +436,18 @@ function usbAndCharger(b: BoardBuilder): void {
     'VSYS',
     top({ x: 53, y: 25 }, 1.5),
   );
-  b.twoPin('C', 'capacitor', '47nF', c0201, 'CHG_BTST', 'LX_CHG', top(chargerAt, 3));
+  b.twoPin('C', 'capacitor', '47nF', c0201, 'CHG_BOOT', 'LX_CHG', top(chargerAt, 3));
   b.decouple('CHG_VIN', top(chargerAt, 3), [
     [2, '10uF/25V', c0603],
     [1, '100nF/25V', c0201],
   ]);
-  b.decouple('CHG_REGN', top(chargerAt, 3), [[1, '4u7/10V', c0402]]);
+  b.decouple('CHG_DRV', top(chargerAt, 3), [[1, '4u7/10V', c0402]]);
   b.decouple('VSYS', top({ x: 53, y: 30 }, 2), [
     [4, '22uF/6.3V', c0603],
     [1, '47uF/6.3V', c0805],
     [2, '100nF', c0201],
   ]);
-  b.twoPin('R', 'resistor', '10K', c0201, 'CHG_REGN', 'BATT_NTC', top(chargerAt, 3));
+  b.twoPin('R', 'resistor', '10K', c0201, 'CHG_DRV', 'BATT_NTC', top(chargerAt, 3));
   b.twoPin('R', 'resistor', '1K', c0201, 'CHG_ILIM', 'GND', top(chargerAt, 3));
   b.twoPin('R', 'resistor', '10K', c0201, 'CHG_INT_N', 'VCC_1V8', top(chargerAt, 3));
   b.twoPin('R', 'resistor', '100K', c0201, 'CHG_OVP_GATE', 'GND', top({ x: 40, y: 16 }, 2));
@@ -512,7 +512,7 @@ function pmic(b: BoardBuilder): void {
         'PMIC_INT_N',
         'PWR_KEY_N',
         'PMIC_RESET_N',
-        'PS_HOLD',
+        'PWR_HOLD',
         'XTAL_32K_IN',
         'XTAL_32K_OUT',
         'CLK_32K',
@@ -650,7 +650,7 @@ function soc(b: BoardBuilder): void {
     'NFC_EN',
     'PMIC_INT_N',
     'PMIC_RESET_N',
-    'PS_HOLD',
+    'PWR_HOLD',
     'CLK_32K',
     'XTAL_24M_IN',
     'XTAL_24M_OUT',
@@ -1613,7 +1613,7 @@ function testPoints(b: BoardBuilder): void {
     b.testPoint(net, 'bottom');
   // prettier-ignore
   for (const net of [
-    'PWR_KEY_N', 'USB_DP', 'USB_DN', 'UART_DBG_TX', 'UART_DBG_RX', 'PS_HOLD', 'PMIC_RESET_N',
+    'PWR_KEY_N', 'USB_DP', 'USB_DN', 'UART_DBG_TX', 'UART_DBG_RX', 'PWR_HOLD', 'PMIC_RESET_N',
     ...jtagSignals, 'I2C0_SCL', 'I2C0_SDA', 'CLK_32K',
   ]) {
     b.testPoint(net, 'bottom', 4);

@@ -15,7 +15,15 @@ export function createTestApp(overrides: Partial<Env> = {}) {
   const env = testEnv(overrides);
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5 });
   const app = createApp({ env, pool, logger: createLogger('silent') });
-  return { app, pool, env, close: () => pool.end() };
+  return {
+    app,
+    pool,
+    env,
+    close: async () => {
+      await app.shutdown();
+      await pool.end();
+    },
+  };
 }
 
 /** A slug no other test uses, so each test owns its rows. */

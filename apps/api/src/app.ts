@@ -14,6 +14,13 @@ import { createBoardsService } from './modules/boards/boards.service';
 import { createImportsRepository } from './modules/imports/imports.repository';
 import { importsRouter } from './modules/imports/imports.routes';
 import { createImportsService } from './modules/imports/imports.service';
+import { createPowerGraphCache } from './modules/power-tree/power-graph-cache';
+import { createPowerTreeRepository } from './modules/power-tree/power-tree.repository';
+import { powerTreeRouter } from './modules/power-tree/power-tree.routes';
+import { createPowerTreeService } from './modules/power-tree/power-tree.service';
+import { createSearchRepository } from './modules/search/search.repository';
+import { searchRouter } from './modules/search/search.routes';
+import { createSearchService } from './modules/search/search.service';
 
 export interface AppDeps {
   env: Env;
@@ -23,9 +30,15 @@ export interface AppDeps {
 
 export function createServices({ pool, logger }: Pick<AppDeps, 'pool' | 'logger'>) {
   const db = createDatabase(pool);
+  const boardsRepository = createBoardsRepository(db);
+  const graphCache = createPowerGraphCache({ pool, repo: createPowerTreeRepository(db), logger });
   return {
-    boards: createBoardsService(createBoardsRepository(db)),
+    boards: createBoardsService(boardsRepository),
     imports: createImportsService({ pool, jobs: createImportsRepository(db), logger }),
+    powerTree: createPowerTreeService({ boards: boardsRepository, cache: graphCache }),
+    search: createSearchService(createSearchRepository(db)),
+    /** releases what the services hold open (the cache's LISTEN connection) */
+    close: () => graphCache.close(),
   };
 }
 
@@ -38,12 +51,19 @@ export function createApp({ env, pool, logger }: AppDeps) {
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
+  // liveness: the process answers, without touching the database
+  api.get('/health/live', (_req, res) => {
+    res.json({ status: 'ok' });
+  });
+  // readiness: the database answers too
   api.get('/health', async (_req, res) => {
     await pool.query('SELECT 1');
     res.json({ status: 'ok' });
   });
   api.use(boardsRouter(services.boards));
   api.use(importsRouter(services.imports, { maxBytes: env.IMPORT_MAX_BYTES }));
+  api.use(powerTreeRouter(services.powerTree));
+  api.use(searchRouter(services.search));
   api.use(notFoundHandler);
   app.use('/api', api);
 
@@ -57,5 +77,5 @@ export function createApp({ env, pool, logger }: AppDeps) {
   }
 
   app.use(errorHandler(logger));
-  return app;
+  return Object.assign(app, { shutdown: services.close });
 }

@@ -17,7 +17,10 @@ const server = app.listen(env.PORT, env.HOST, () => {
 
 function shutdown() {
   server.close(() => {
-    void pool.end().then(() => process.exit(0));
+    void app
+      .shutdown()
+      .then(() => pool.end())
+      .then(() => process.exit(0));
   });
   setTimeout(() => process.exit(0), 3000).unref();
 }

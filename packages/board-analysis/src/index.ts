@@ -15,3 +15,6 @@ export * from './derive-power-links';
 export * from './root-net';
 export * from './assemble-board';
 export * from './carry-over-annotations';
+export * from './power-graph';
+export * from './rail-loads';
+export * from './coupled-groups';

@@ -2,3 +2,4 @@ export * from './board';
 export * from './board-file';
 export * from './import';
 export * from './api-error';
+export * from './power-tree';

@@ -51,6 +51,8 @@ export const nets = pgTable(
   (t) => [
     uniqueIndex('nets_board_name_key').on(t.boardId, t.name),
     index('nets_board_normalized_idx').on(t.boardId, t.normalizedName),
+    // rail search (pg_trgm + btree_gin, created in migration 0001)
+    index('nets_search_idx').using('gin', t.boardId, t.normalizedName.op('gin_trgm_ops')),
   ],
 );
 
@@ -70,6 +72,7 @@ export const netAliases = pgTable(
   (t) => [
     uniqueIndex('net_aliases_board_alias_key').on(t.boardId, t.alias),
     index('net_aliases_net_idx').on(t.netId),
+    index('net_aliases_search_idx').using('gin', t.boardId, t.normalizedAlias.op('gin_trgm_ops')),
   ],
 );
 

@@ -9,6 +9,7 @@ import {
 } from '@railyard/board-analysis';
 import type { BoardMeta, ImportSummary } from '@railyard/shared';
 import { AppError } from '../../lib/app-error';
+import { boardChangedChannel } from '../power-tree/power-graph-cache';
 import { copyRows, reserveIds } from './copy-rows';
 
 export interface StoreRequest {
@@ -184,6 +185,8 @@ export async function storeBoardDraft(client: PoolClient, request: StoreRequest)
     draft.rootNet === null ? null : (netId.get(draft.rootNet) ?? null),
     rootEntered && draft.rootNet !== null,
   ]);
+  // delivered at commit: every API process drops its cached power graph of this board
+  await client.query(`SELECT pg_notify('${boardChangedChannel}', $1::text)`, [String(board)]);
   onProgress('finishing', 0.97);
 
   return {

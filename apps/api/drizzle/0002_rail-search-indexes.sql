@@ -1,0 +1,2 @@
+CREATE INDEX "net_aliases_search_idx" ON "net_aliases" USING gin ("board_id","normalized_alias" gin_trgm_ops);--> statement-breakpoint
+CREATE INDEX "nets_search_idx" ON "nets" USING gin ("board_id","normalized_name" gin_trgm_ops);
