@@ -47,7 +47,8 @@ export function createApp({ env, pool, logger }: AppDeps) {
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
-  app.use(pinoHttp({ logger, autoLogging: env.NODE_ENV !== 'test' }));
+  // one log line per request only when asked for (LOG_LEVEL=debug or trace)
+  app.use(pinoHttp({ logger, autoLogging: env.LOG_LEVEL === 'debug' || env.LOG_LEVEL === 'trace' }));
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));

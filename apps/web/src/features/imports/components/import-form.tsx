@@ -19,6 +19,7 @@ import {
   type BoardFields,
   type FieldErrors,
 } from '../import-form-check';
+import { refusedImportIssues } from '../refused-import-issues';
 import { ImportIssuesTable } from './import-issues-table';
 import { ImportProgress } from './import-progress';
 import { ImportSummary } from './import-summary';
@@ -92,6 +93,8 @@ export function ImportForm({ target, onSucceeded }: ImportFormProps) {
     if (field) apiFieldErrors[field] ??= issue.message;
   }
   const fieldError = (name: BoardFieldName | 'netlist') => errors[name] ?? apiFieldErrors[name];
+  // A refused upload (400 import_invalid) lists every problem of the files, by file, line and field.
+  const refused = refusedImportIssues(apiError?.details);
 
   const setField = (name: BoardFieldName, value: string) => {
     setFields((current) => {
@@ -403,6 +406,8 @@ export function ImportForm({ target, onSucceeded }: ImportFormProps) {
 
       {job && <ImportIssuesTable title="Errors" issues={job.errors} tone="danger" />}
       {job && <ImportIssuesTable title="Warnings" issues={job.warnings} tone="caution" />}
+      {!job && <ImportIssuesTable title="Errors" issues={refused.errors} tone="danger" />}
+      {!job && <ImportIssuesTable title="Warnings" issues={refused.warnings} tone="caution" />}
     </div>
   );
 }
