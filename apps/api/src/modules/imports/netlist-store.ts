@@ -3,6 +3,7 @@
 import type { PoolClient } from 'pg';
 import {
   carryOverAnnotations,
+  inferComponentKind,
   normalizeNetName,
   type BoardDraft,
   type PreviousAnnotations,
@@ -144,7 +145,7 @@ export async function storeBoardDraft(client: PoolClient, request: StoreRequest)
     'components',
     ['id', 'board_id', 'refdes', 'kind', 'kind_entered', 'value', 'magnitude', 'unit', 'tolerance', 'rated_voltage', 'package', 'side', 'x', 'y', 'rotation'],
     draft.components.map((c, i) => [
-      componentIds[i], board, c.refdes, c.kind, false, c.value, c.magnitude, c.unit, c.tolerance,
+      componentIds[i], board, c.refdes, c.kind, c.kind !== inferComponentKind(c.refdes), c.value, c.magnitude, c.unit, c.tolerance,
       c.ratedVoltage, c.package, c.side, c.x, c.y, c.rotation,
     ]),
   );
