@@ -52,7 +52,7 @@ async function main() {
   requireFile(serverFile, 'start the server');
   say('Starting the server');
   const server = runCommand(localBin('tsx'), [serverFile], {
-    env: { ...env, PORT: String(port), NODE_ENV: 'production', STATIC_DIR },
+    env: { ...env, PORT: String(port), STATIC_DIR },
     detached: true,
   });
   const url = `http://127.0.0.1:${port}/`;

@@ -3,10 +3,14 @@ import { existsSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { createServices } from '../apps/api/src/app';
+import { readEnv, usesFakeGitHub } from '../apps/api/src/config/env';
+import { demoAccountIds, demoAccounts } from '../apps/api/src/dev/fake-github/demo-accounts';
 import { createPool } from '../apps/api/src/db/client';
 import { createLogger } from '../apps/api/src/lib/logger';
 import { importFromDisk } from '../apps/api/src/modules/imports/import-files';
 import type { ImportsService } from '../apps/api/src/modules/imports/imports.service';
+import type pg from 'pg';
+import type { UserRole } from '@railyard/shared';
 
 const boardsDir = fileURLToPath(new URL('./boards', import.meta.url));
 
@@ -34,6 +38,31 @@ export async function loadDemoBoards(imports: ImportsService): Promise<string[]>
   return loaded;
 }
 
+/** The demo people of the local fake GitHub, one of each role, so every screen can be tried. */
+const demoRoles: Record<number, UserRole> = {
+  [demoAccountIds.member]: 'member',
+  [demoAccountIds.secondMember]: 'member',
+  [demoAccountIds.moderator]: 'moderator',
+  [demoAccountIds.adminToBe]: 'admin',
+};
+
+/** Adds the demo users that are missing; never changes an existing account. Returns the logins added. */
+export async function loadDemoUsers(pool: pg.Pool): Promise<string[]> {
+  const added: string[] = [];
+  for (const account of demoAccounts) {
+    const role = demoRoles[account.id];
+    if (!role) continue;
+    const primary = account.emails.find((e) => e.primary && e.verified);
+    const { rowCount } = await pool.query(
+      `INSERT INTO users (github_id, login, name, email, role) VALUES ($1, $2, $3, $4, $5)
+       ON CONFLICT (github_id) DO NOTHING`,
+      [account.id, account.login, account.name ?? '', primary?.email ?? null, role],
+    );
+    if (rowCount) added.push(`${account.login} (${role})`);
+  }
+  return added;
+}
+
 if (import.meta.url === `file://${process.argv[1]}`) {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set');
@@ -45,6 +74,12 @@ if (import.meta.url === `file://${process.argv[1]}`) {
     } else {
       const slugs = await loadDemoBoards(createServices({ pool, logger: createLogger('warn') }).imports);
       console.log(`demo data: loaded ${slugs.join(', ')}`);
+    }
+    // Demo accounts exist only on the local fake GitHub: with a real OAuth app these ids belong to
+    // strangers, so no role is ever granted by them there.
+    if (usesFakeGitHub(readEnv(process.env))) {
+      const users = await loadDemoUsers(pool);
+      if (users.length > 0) console.log(`demo users: ${users.join(', ')}`);
     }
   } finally {
     await pool.end();

@@ -2,20 +2,24 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, uniqueSlug } from '../support/test-app';
+import { createTestApp, uniqueSlug, type TestApp } from '../support/test-app';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
-const { app, close } = createTestApp();
+let t: TestApp;
+let app: string;
 const slug = uniqueSlug('read');
 
 beforeAll(async () => {
-  const res = await request(app)
+  t = await createTestApp();
+  app = t.baseUrl;
+  const admin = await t.agentAs('admin');
+  const res = await admin
     .post(`/api/boards/${slug}/imports?wait=true`)
     .field('board', JSON.stringify({ title: 'Read API board', deviceFamily: 'Test family', batteryVoltage: 3.85 }))
     .attach('netlist', path.join(here, 'fixtures/sample-356a.ipc'));
   expect(res.status, JSON.stringify(res.body)).toBe(201);
 });
-afterAll(close);
+afterAll(() => t.close());
 
 describe('read API', () => {
   it('lists the board with its counts', async () => {

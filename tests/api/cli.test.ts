@@ -5,13 +5,14 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { promisify } from 'node:util';
 import { afterAll, describe, expect, it } from 'vitest';
-import { boardRowCounts, createTestApp, uniqueSlug } from '../support/test-app';
+import { boardRowCounts, uniqueSlug } from '../support/test-app';
+import pg from 'pg';
 
 const run = promisify(execFile);
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const fixture = path.join(root, 'tests/api/fixtures/sample-356a.ipc');
-const { pool, close } = createTestApp();
-afterAll(close);
+const pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
+afterAll(() => pool.end());
 
 function cli(...args: string[]) {
   return run(path.join(root, 'node_modules/.bin/tsx'), ['apps/api/src/cli.ts', ...args], {

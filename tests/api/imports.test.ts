@@ -2,8 +2,8 @@ import { readdirSync, readFileSync, existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import request from 'supertest';
-import { afterAll, describe, expect, it } from 'vitest';
-import { boardRowCounts, createTestApp, uniqueSlug } from '../support/test-app';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { boardRowCounts, createTestApp, uniqueSlug, type TestApp } from '../support/test-app';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const sample = path.join(here, 'fixtures/sample-356a.ipc');
@@ -13,8 +13,13 @@ const demoDir = () =>
     .map((d) => path.join(seedBoards, d))
     .find((d) => existsSync(path.join(d, 'netlist.ipc')))!;
 
-const { app, pool, close } = createTestApp();
-afterAll(close);
+let t: TestApp;
+let admin: Awaited<ReturnType<TestApp['agentAs']>>;
+beforeAll(async () => {
+  t = await createTestApp();
+  admin = await t.agentAs('admin');
+});
+afterAll(() => t.close());
 
 /**
  * Counts read straight off the fixed columns of the IPC-D-356A record layout (net name in columns 4–17,
@@ -41,7 +46,7 @@ function countIpcRecords(text: string) {
 }
 
 function upload(slug: string, files: Record<string, string | Buffer>, fields: Record<string, string> = {}, wait = true) {
-  let req = request(app).post(`/api/boards/${slug}/imports${wait ? '?wait=true' : ''}`);
+  let req = admin.post(`/api/boards/${slug}/imports${wait ? '?wait=true' : ''}`);
   for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
   for (const [k, v] of Object.entries(files)) {
     req = typeof v === 'string' && existsSync(v) ? req.attach(k, v) : req.attach(k, Buffer.from(v), `${k}.txt`);
@@ -59,7 +64,7 @@ describe('POST /api/boards/:slug/imports', () => {
     expect(expected).toEqual({ nets: 5, pins: 6, components: 4 });
     expect(res.body.job.summary).toMatchObject({ nets: expected.nets, pins: expected.pins, components: expected.components });
 
-    const nets = await request(app).get(`/api/boards/${slug}/nets`);
+    const nets = await request(t.baseUrl).get(`/api/boards/${slug}/nets`);
     expect(nets.status).toBe(200);
     expect(nets.body.nets.map((n: { name: string }) => n.name).sort()).toEqual(
       ['3V3', '3V3_LDO_FEEDBACK_DIVIDER', 'GND', 'VBAT', 'VSYS'].sort(),
@@ -67,7 +72,7 @@ describe('POST /api/boards/:slug/imports', () => {
     const gnd = nets.body.nets.find((n: { name: string }) => n.name === 'GND');
     expect(gnd.kind).toBe('ground');
 
-    const j1 = await request(app).get(`/api/boards/${slug}/components`).query({ net: 'GND' });
+    const j1 = await request(t.baseUrl).get(`/api/boards/${slug}/components`).query({ net: 'GND' });
     expect(j1.status).toBe(200);
     const connector = j1.body.components.find((c: { refdes: string }) => c.refdes === 'J1');
     // IPC-D-356A CUST 0: one unit is 0.0001 in = 2.54 µm, so X+001000 Y+002000 is (2.54 mm, 5.08 mm)
@@ -87,7 +92,7 @@ describe('POST /api/boards/:slug/imports', () => {
     });
     expect(res.status, JSON.stringify(res.body).slice(0, 2000)).toBe(201);
     const expected = countIpcRecords(readFileSync(netlist, 'utf8'));
-    const counts = await boardRowCounts(pool, slug);
+    const counts = await boardRowCounts(t.pool, slug);
     expect(counts.pins).toBe(expected.pins);
     expect(counts.components).toBe(expected.components);
     expect(counts.nets).toBe(expected.nets);
@@ -104,7 +109,7 @@ describe('POST /api/boards/:slug/imports', () => {
     const seen: number[] = [job.progress];
     for (let i = 0; i < 100 && job.status === 'running'; i++) {
       await new Promise((r) => setTimeout(r, 20));
-      job = (await request(app).get(`/api/imports/${job.id}`)).body.job;
+      job = (await request(t.baseUrl).get(`/api/imports/${job.id}`)).body.job;
       seen.push(job.progress);
     }
     expect(job.status).toBe('succeeded');
@@ -122,7 +127,7 @@ describe('POST /api/boards/:slug/imports', () => {
     expect(res.body.error.details.errors).toContainEqual(
       expect.objectContaining({ line: lineNo, field: expect.stringMatching(/x/i) }),
     );
-    expect(await boardRowCounts(pool, slug)).toMatchObject({ boards: 0, nets: 0, pins: 0 });
+    expect(await boardRowCounts(t.pool, slug)).toMatchObject({ boards: 0, nets: 0, pins: 0 });
   });
 
   it('answers 400 naming line 1 when a CSV is sent as IPC-D-356', async () => {
@@ -139,9 +144,10 @@ describe('POST /api/boards/:slug/imports', () => {
   });
 
   it('answers 413 for an upload over the size limit', async () => {
-    const small = createTestApp({ IMPORT_MAX_BYTES: 1024 });
+    const small = await createTestApp({ IMPORT_MAX_BYTES: 1024 });
     try {
-      const res = await request(small.app)
+      const smallAdmin = await small.agentAs('admin');
+      const res = await smallAdmin
         .post(`/api/boards/${uniqueSlug('big')}/imports`)
         .attach('netlist', Buffer.alloc(4096, 'C  padding\n'), 'big.ipc');
       expect(res.status).toBe(413);
@@ -153,7 +159,7 @@ describe('POST /api/boards/:slug/imports', () => {
 
   it('answers 400 without a netlist file and for bad board details', async () => {
     const slug = uniqueSlug('nofile');
-    const none = await request(app).post(`/api/boards/${slug}/imports`).field('format', 'csv');
+    const none = await admin.post(`/api/boards/${slug}/imports`).field('format', 'csv');
     expect(none.status).toBe(400);
     expect(none.body.error.code).toBe('missing_file');
     const bad = await upload(slug, { netlist: sample }, { board: JSON.stringify({ title: '' }) });
@@ -171,11 +177,11 @@ describe('POST /api/boards/:slug/imports', () => {
   it('leaves a board exactly as it was when a replacing import has errors', async () => {
     const slug = uniqueSlug('keep');
     expect((await upload(slug, { netlist: sample })).status).toBe(201);
-    const before = await boardRowCounts(pool, slug);
+    const before = await boardRowCounts(t.pool, slug);
     const broken = readFileSync(sample, 'utf8').replace('327VSYS             U1    -4', '327VSYS                   -4');
     const res = await upload(slug, { netlist: Buffer.from(broken) }, { replace: 'true', format: 'ipc-d-356' });
     expect(res.status).toBe(400);
-    expect(await boardRowCounts(pool, slug)).toEqual(before);
+    expect(await boardRowCounts(t.pool, slug)).toEqual(before);
   });
 
   it('on replace keeps entered links and voltages whose nets still exist and reports what it dropped', async () => {
@@ -204,9 +210,9 @@ describe('POST /api/boards/:slug/imports', () => {
     expect(res.body.job.summary.dropped).toEqual(
       expect.arrayContaining([expect.stringContaining('VCC_1V8'), expect.stringContaining('converter link VSYS → VCC_1V8 via U2')]),
     );
-    const nets = (await request(app).get(`/api/boards/${slug}/nets`)).body.nets;
+    const nets = (await request(t.baseUrl).get(`/api/boards/${slug}/nets`)).body.nets;
     expect(nets.find((n: { name: string }) => n.name === 'VSYS').nominalVoltage).toBe(3.8);
-    const { rows } = await pool.query(
+    const { rows } = await t.pool.query(
       `SELECT f.name AS from, t.name AS to, l.via_refdes AS via, l.origin FROM power_links l
        JOIN nets f ON f.id = l.from_net_id JOIN nets t ON t.id = l.to_net_id JOIN boards b ON b.id = l.board_id
        WHERE b.slug = $1 AND l.origin = 'entered'`,
@@ -218,7 +224,7 @@ describe('POST /api/boards/:slug/imports', () => {
 
 describe('GET /api/imports/:id', () => {
   it('answers 404 for an unknown import', async () => {
-    expect((await request(app).get('/api/imports/00000000-0000-4000-8000-000000000000')).status).toBe(404);
-    expect((await request(app).get('/api/imports/not-a-uuid')).status).toBe(404);
+    expect((await request(t.baseUrl).get('/api/imports/00000000-0000-4000-8000-000000000000')).status).toBe(404);
+    expect((await request(t.baseUrl).get('/api/imports/not-a-uuid')).status).toBe(404);
   });
 });

@@ -4,24 +4,29 @@ import { fileURLToPath } from 'node:url';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AnnotationFile, NetDetail, PowerTree, RailSearchResponse } from '@railyard/shared';
-import { createTestApp, uniqueSlug } from '../support/test-app';
+import { createTestApp, uniqueSlug, type TestApp } from '../support/test-app';
 
 // The demo handset board: its annotations name the converter and switch links; the importer derives the
 // series links through inductors, ferrites, fuses and 0-ohm links from the netlist.
 const demo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../seed/boards/ostrand-os-m1-5521');
 const annotations = JSON.parse(readFileSync(path.join(demo, 'annotations.json'), 'utf8')) as AnnotationFile;
-const { app, close } = createTestApp();
+let t: TestApp;
+let app: string;
+let admin: Awaited<ReturnType<TestApp['agentAs']>>;
 const slug = uniqueSlug('tree');
 
 beforeAll(async () => {
-  const res = await request(app)
+  t = await createTestApp();
+  app = t.baseUrl;
+  admin = await t.agentAs('admin');
+  const res = await admin
     .post(`/api/boards/${slug}/imports?wait=true`)
     .attach('netlist', path.join(demo, 'netlist.ipc'))
     .attach('parts', path.join(demo, 'parts.csv'))
     .attach('annotations', path.join(demo, 'annotations.json'));
   expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
 });
-afterAll(close);
+afterAll(() => t.close());
 
 async function tree(url: string): Promise<PowerTree> {
   const res = await request(app).get(url);
@@ -133,7 +138,7 @@ describe('power graph cache', () => {
     const links = (rail: string) =>
       JSON.stringify({ format: 'railyard-annotations', version: 1, rootNet: 'VBAT', powerLinks: [{ from: 'VBAT', to: rail, via: 'U1', kind: 'converter' }] });
     const load = (rail: string, replace: boolean) =>
-      request(app)
+      admin
         .post(`/api/boards/${small}/imports?wait=true`)
         .field('format', 'csv')
         .field('replace', String(replace))

@@ -1,6 +1,5 @@
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import request from 'supertest';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, startWebServer } from '../support/browser';
@@ -14,7 +13,8 @@ const title = `Browse test board ${slug}`;
 
 beforeAll(async () => {
   web = await startWebServer();
-  const res = await request(web.app)
+  const admin = await web.agentAs('admin');
+  const res = await admin
     .post(`/api/boards/${slug}/imports?wait=true`)
     .field('board', JSON.stringify({ title, deviceFamily: 'Test family' }))
     .attach('netlist', path.join(here, '../api/fixtures/sample-356a.ipc'));

@@ -3,8 +3,8 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, startWebServer } from '../support/browser';
-import { boardRowCounts, uniqueSlug } from '../support/test-app';
+import { launchBrowser, signInInBrowser, startWebServer } from '../support/browser';
+import { boardRowCounts, createUser, uniqueSlug } from '../support/test-app';
 
 const fixture = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../api/fixtures/sample-356a.ipc');
 let web: Awaited<ReturnType<typeof startWebServer>>;
@@ -20,7 +20,8 @@ afterAll(async () => {
 });
 
 async function fillNewBoard(page: import('playwright-core').Page, slug: string, file: { name: string; buffer: Buffer }) {
-  await page.goto(`${web.baseUrl}/import`);
+  const admin = await createUser(web, 'admin');
+  await signInInBrowser(page, web.baseUrl, admin.login, '/import');
   await page.getByLabel('Title').fill(`Upload ${slug}`);
   await page.getByLabel('Slug').fill(slug);
   await page.getByLabel('Netlist', { exact: true }).setInputFiles({ ...file, mimeType: 'text/plain' });

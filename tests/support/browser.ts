@@ -1,9 +1,8 @@
 // Browser tests drive Debian's Chromium through playwright-core; no browser is ever downloaded.
 import { existsSync } from 'node:fs';
-import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type Page } from 'playwright-core';
 import { createTestApp } from './test-app';
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -28,17 +27,13 @@ export async function startWebServer() {
   if (!existsSync(path.join(staticDir, 'index.html'))) {
     throw new Error(`The built client is missing at ${staticDir}: run \`npx vite build\` (npm test does it)`);
   }
-  const test = createTestApp({ STATIC_DIR: staticDir });
-  const server = await new Promise<import('node:http').Server>((resolve) => {
-    const s = test.app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  const { port } = server.address() as AddressInfo;
-  return {
-    ...test,
-    baseUrl: `http://127.0.0.1:${port}`,
-    async stop() {
-      await new Promise((r) => server.close(r));
-      await test.close();
-    },
-  };
+  const test = await createTestApp({ STATIC_DIR: staticDir });
+  return { ...test, stop: () => test.close() };
+}
+
+/** Signs a browser page in through the fake GitHub's page, as a person would, and lands on `returnTo`. */
+export async function signInInBrowser(page: Page, baseUrl: string, login: string, returnTo = '/') {
+  await page.goto(`${baseUrl}/auth/github?returnTo=${encodeURIComponent(returnTo)}`);
+  await page.getByRole('button', { name: new RegExp(login) }).click();
+  await page.waitForURL(`${baseUrl}${returnTo}`);
 }

@@ -1,13 +1,27 @@
 // createApp(): middleware, routers and the error handler. No listen() here, so tests can mount it.
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import express from 'express';
+import express, { type Request } from 'express';
 import { pinoHttp } from 'pino-http';
 import type pg from 'pg';
-import type { Env } from './config/env';
+import { usesFakeGitHub, type Env } from './config/env';
 import { createDatabase } from './db/client';
+import { createFakeGitHub } from './dev/fake-github/fake-github';
+import { demoAccounts } from './dev/fake-github/demo-accounts';
 import type { Logger } from './lib/logger';
+import { csrfGuard } from './middleware/csrf-guard';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { createRateLimit } from './middleware/rate-limit';
+import { securityHeaders } from './middleware/security-headers';
+import { adminRouter } from './modules/admin/admin.routes';
+import { createAuditRepository } from './modules/audit/audit.repository';
+import { refuseBanned, sessionApiRouter, signInRouter } from './modules/auth/auth.routes';
+import { callbackPath, createPassport, fakeClient, fakeGitHubPath, type OAuthEndpoints } from './modules/auth/passport-setup';
+import { absoluteSessionExpiry, createSessionMiddleware, sessionCookieName } from './modules/auth/session';
+import { createUsersRepository } from './modules/auth/users.repository';
+import { boardEditsRouter } from './modules/board-edits/board-edits.routes';
+import { createBoardEditsRepository } from './modules/board-edits/board-edits.repository';
+import { createBoardEditsService } from './modules/board-edits/board-edits.service';
 import { createBoardsRepository } from './modules/boards/boards.repository';
 import { boardsRouter } from './modules/boards/boards.routes';
 import { createBoardsService } from './modules/boards/boards.service';
@@ -37,20 +51,75 @@ export function createServices({ pool, logger }: Pick<AppDeps, 'pool' | 'logger'
     imports: createImportsService({ pool, jobs: createImportsRepository(db), logger }),
     powerTree: createPowerTreeService({ boards: boardsRepository, cache: graphCache }),
     search: createSearchService(createSearchRepository(db)),
+    boardEdits: createBoardEditsService({ boards: boardsRepository, edits: createBoardEditsRepository(db) }),
+    users: createUsersRepository(db),
+    audit: createAuditRepository(db),
     /** releases what the services hold open (the cache's LISTEN connection) */
     close: () => graphCache.close(),
   };
 }
 
+function requestOrigin(req: Request): string {
+  return `${req.protocol}://${req.get('host')}`;
+}
+
 export function createApp({ env, pool, logger }: AppDeps) {
   const services = createServices({ pool, logger });
+  const production = env.NODE_ENV === 'production';
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
+  if (env.TRUST_PROXY) app.set('trust proxy', /^\d+$/.test(env.TRUST_PROXY) ? Number(env.TRUST_PROXY) : env.TRUST_PROXY);
+
+  app.use(securityHeaders({ staticDir: env.STATIC_DIR, production, imageHosts: production ? ['https://avatars.githubusercontent.com'] : [] }));
   // one log line per request only when asked for (LOG_LEVEL=debug or trace)
   app.use(pinoHttp({ logger, autoLogging: env.LOG_LEVEL === 'debug' || env.LOG_LEVEL === 'trace' }));
 
+  // Sign-in: real GitHub, or outside production without credentials the local fake at /fake-github.
+  const fake = usesFakeGitHub(env)
+    ? createFakeGitHub({
+        clients: [{ ...fakeClient, redirectUris: [] }],
+        accounts: [...demoAccounts],
+        // any loopback origin this server answers on may receive codes
+        isAllowedRedirect: (uri: string) => new URL(uri).pathname === callbackPath,
+      })
+    : null;
+  if (fake) app.use(fakeGitHubPath, fake.router);
+  const endpointsFor = (req: Request): OAuthEndpoints =>
+    fake
+      ? {
+          ...fakeClient,
+          authorizationURL: `${requestOrigin(req)}${fakeGitHubPath}/login/oauth/authorize`,
+          tokenURL: `${requestOrigin(req)}${fakeGitHubPath}/login/oauth/access_token`,
+          userProfileURL: `${requestOrigin(req)}${fakeGitHubPath}/user`,
+          userEmailURL: `${requestOrigin(req)}${fakeGitHubPath}/user/emails`,
+        }
+      : {
+          clientId: env.GITHUB_CLIENT_ID!,
+          clientSecret: env.GITHUB_CLIENT_SECRET!,
+          authorizationURL: env.GITHUB_AUTHORIZE_URL,
+          tokenURL: env.GITHUB_TOKEN_URL,
+          userProfileURL: env.GITHUB_USER_URL,
+          userEmailURL: env.GITHUB_EMAILS_URL,
+        };
+  const { passport, strategyFor } = createPassport({ env, users: services.users, logger, endpointsFor });
+
+  app.use(createSessionMiddleware(env, pool));
+  app.use(absoluteSessionExpiry(env));
+  app.use(passport.session());
+  app.use(refuseBanned);
+
+  const minute = 60_000;
+  const limits = {
+    signIn: createRateLimit(pool, 'sign-in', env.RATE_SIGNIN_PER_15_MIN, 15 * minute),
+    writes: createRateLimit(pool, 'writes', env.RATE_WRITES_PER_MIN, minute),
+    uploads: createRateLimit(pool, 'uploads', env.RATE_UPLOADS_PER_HOUR, 60 * minute),
+  };
+  app.use(signInRouter({ passport, strategyFor, signInLimit: limits.signIn }));
+
+  const publicOrigin = env.PUBLIC_URL ? new URL(env.PUBLIC_URL).origin : null;
   const api = express.Router();
+  api.use(csrfGuard({ isAllowedOrigin: (origin, req) => origin === (publicOrigin ?? requestOrigin(req)) }));
   api.use(express.json({ limit: '1mb' }));
   // liveness: the process answers, without touching the database
   api.get('/health/live', (_req, res) => {
@@ -61,10 +130,13 @@ export function createApp({ env, pool, logger }: AppDeps) {
     await pool.query('SELECT 1');
     res.json({ status: 'ok' });
   });
+  api.use(sessionApiRouter({ cookieName: sessionCookieName(env) }));
   api.use(boardsRouter(services.boards));
-  api.use(importsRouter(services.imports, { maxBytes: env.IMPORT_MAX_BYTES }));
+  api.use(importsRouter(services.imports, { maxBytes: env.IMPORT_MAX_BYTES, uploadLimit: limits.uploads }));
   api.use(powerTreeRouter(services.powerTree));
   api.use(searchRouter(services.search));
+  api.use(boardEditsRouter(services.boardEdits, limits.writes));
+  api.use(adminRouter({ users: services.users, audit: services.audit, writeLimit: limits.writes }));
   api.use(notFoundHandler);
   app.use('/api', api);
 
@@ -78,5 +150,5 @@ export function createApp({ env, pool, logger }: AppDeps) {
   }
 
   app.use(errorHandler(logger));
-  return Object.assign(app, { shutdown: services.close });
+  return Object.assign(app, { shutdown: services.close, fakeGitHub: fake, limits });
 }

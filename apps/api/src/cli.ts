@@ -1,6 +1,6 @@
 // `npm run railyard -- import <file> --board <slug> ...`: imports a netlist from the command line.
 import { Command, Option } from 'commander';
-import { boardSlugSchema, netlistFormats, type ImportIssue } from '@railyard/shared';
+import { boardSlugSchema, netlistFormats, userRoleSchema, userRoles, type ImportIssue } from '@railyard/shared';
 import { createServices } from './app';
 import { createPool } from './db/client';
 import { AppError } from './lib/app-error';
@@ -73,6 +73,41 @@ program
       printIssues('error', details?.errors ?? []);
       printIssues('warning', details?.warnings ?? []);
       process.exitCode = 1;
+    } finally {
+      await pool.end();
+    }
+  });
+
+program
+  .command('role')
+  .description("set a user's role (the first admin of a fresh database is named this way or by RAILYARD_ADMINS)")
+  .argument('<user>', 'GitHub login or numeric GitHub id of someone who has signed in once')
+  .argument('<role>', `one of ${userRoles.join(', ')}`)
+  .option('--reason <text>', 'why, for the audit log', 'set from the command line')
+  .action(async (who: string, role: string, opts: { reason: string }) => {
+    const parsedRole = userRoleSchema.safeParse(role);
+    if (!parsedRole.success) {
+      console.error(`role "${role}": choose one of ${userRoles.join(', ')}`);
+      process.exitCode = 2;
+      return;
+    }
+    const databaseUrl = process.env.DATABASE_URL;
+    if (!databaseUrl) {
+      console.error('DATABASE_URL is not set (npm run railyard sets it for the local cluster).');
+      process.exitCode = 2;
+      return;
+    }
+    const pool = createPool(databaseUrl);
+    try {
+      const users = createServices({ pool, logger: createLogger('warn') }).users;
+      const user = await users.findByLoginOrGitHubId(who);
+      if (!user) {
+        console.error(`No user "${who}": they must sign in once before they can be given a role.`);
+        process.exitCode = 1;
+        return;
+      }
+      const updated = await users.update(user, { role: parsedRole.data, reason: opts.reason }, null);
+      console.log(`${updated.login} is now ${updated.role}`);
     } finally {
       await pool.end();
     }

@@ -37,6 +37,7 @@ export function createAppRouter(queryClient: QueryClient) {
         { index: true, ...lazyPage(queryClient, () => import('./routes/boards')) },
         { path: paths.boards.path, ...lazyPage(queryClient, () => import('./routes/boards')) },
         { path: paths.board.path, ...lazyPage(queryClient, () => import('./routes/board')) },
+        { path: paths.net.path, ...lazyPage(queryClient, () => import('./routes/net')) },
         {
           path: paths.boardImport.path,
           ...lazyPage(queryClient, () => import('./routes/board-import')),
@@ -45,6 +46,7 @@ export function createAppRouter(queryClient: QueryClient) {
           path: paths.newBoardImport.path,
           ...lazyPage(queryClient, () => import('./routes/new-board-import')),
         },
+        { path: paths.search.path, ...lazyPage(queryClient, () => import('./routes/search')) },
         { path: '*', ...lazyPage(queryClient, () => import('./routes/not-found')) },
       ],
     },

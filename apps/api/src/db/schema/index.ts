@@ -1,3 +1,4 @@
 export * from './enums';
 export * from './boards';
 export * from './imports';
+export * from './users';

@@ -1,21 +1,22 @@
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
 import { boardMetaSchema, boardSlugSchema, importRequestFieldsSchema } from '@railyard/shared';
 import { AppError } from '../../lib/app-error';
+import { requireRole } from '../../middleware/require-role';
 import type { ImportsService, UploadedFile } from './imports.service';
 
 const fileFields = ['netlist', 'parts', 'annotations'] as const;
 const waitQuerySchema = z.strictObject({ wait: z.enum(['true', 'false']).optional() });
 
-export function importsRouter(service: ImportsService, options: { maxBytes: number }): Router {
+export function importsRouter(service: ImportsService, options: { maxBytes: number; uploadLimit: RequestHandler }): Router {
   const router = Router();
   const upload = multer({
     storage: multer.memoryStorage(),
     limits: { fileSize: options.maxBytes, files: fileFields.length, fields: 10, fieldSize: 64 * 1024 },
   }).fields(fileFields.map((name) => ({ name, maxCount: 1 })));
 
-  router.post('/boards/:slug/imports', upload, async (req, res) => {
+  router.post('/boards/:slug/imports', requireRole('admin'), options.uploadLimit, upload, async (req, res) => {
     const slug = boardSlugSchema.parse(req.params.slug);
     const { wait } = waitQuerySchema.parse(req.query);
     const fields = importRequestFieldsSchema.parse(req.body ?? {});
@@ -53,7 +54,7 @@ export function importsRouter(service: ImportsService, options: { maxBytes: numb
       netlist,
       parts: file('parts'),
       annotations: file('annotations'),
-      enteredBy: 'import:web',
+      enteredBy: `user:${req.user!.id}`,
     });
     if (wait !== 'true') {
       res.status(202).location(`/api/imports/${job.id}`).json({ job });

@@ -1,10 +1,11 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { boardQueryOptions, useBoard } from '../../features/boards/api/get-board';
 import { netsQueryOptions } from '../../features/boards/api/get-nets';
 import { BoardHeader } from '../../features/boards/components/board-header';
 import { BoardNets } from '../../features/boards/components/board-nets';
+import { RailSearchBox } from '../../features/rails/components/rail-search-box';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -20,10 +21,12 @@ export const clientLoader =
 export default function BoardRoute() {
   const slug = useParams().slug ?? '';
   const { data: board } = useBoard(slug);
+  // Already loaded for the nets table below; its errors are shown there, not here.
+  const nets = useQuery(netsQueryOptions(slug)).data?.nets;
   return (
     <>
       <title>{`${board.title} · Railyard`}</title>
-      <BoardHeader board={board} />
+      <BoardHeader board={board} search={<RailSearchBox slug={slug} nets={nets} />} />
       <SectionErrorBoundary title="Could not show the nets" resetKeys={[slug]}>
         {/* Keyed by board: filter, order and paging start fresh on another board. */}
         <BoardNets key={slug} slug={slug} />

@@ -1,5 +1,6 @@
 import { Suspense } from 'react';
 import {
+  Form,
   Link,
   NavLink,
   Outlet,
@@ -16,6 +17,28 @@ function navClass(isActive: boolean) {
   return `rounded-md px-2.5 py-1 text-[13px] font-medium ${
     isActive ? 'bg-raised text-ink' : 'text-ink-muted hover:text-ink'
   }`;
+}
+
+/** Rail search over all boards; submitting opens the search page with the text as ?q=. */
+function TopSearch() {
+  return (
+    <Form role="search" action={paths.search.path} className="hidden sm:block">
+      <label htmlFor="top-search" className="sr-only">
+        Search rails on all boards
+      </label>
+      <input
+        id="top-search"
+        name="q"
+        type="search"
+        required
+        maxLength={100}
+        autoComplete="off"
+        spellCheck={false}
+        placeholder="Search rails on all boards"
+        className="h-7.5 w-56 rounded-md border border-line bg-field px-2.5 font-mono text-[13px] text-ink placeholder:font-sans placeholder:text-ink-faint hover:border-line-strong focus-visible:border-accent"
+      />
+    </Form>
+  );
 }
 
 export function AppShell() {
@@ -50,7 +73,9 @@ export function AppShell() {
               Import
             </NavLink>
           </nav>
-          <div className="ml-auto">
+          <div className="ml-auto flex items-center gap-3">
+            {/* The search page has its own, larger field. */}
+            {pathname !== paths.search.path && <TopSearch />}
             <ThemeToggle />
           </div>
         </div>

@@ -1,10 +1,16 @@
 import type { BoardDetail } from '@railyard/shared';
 import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { LinkButton } from '../../../components/ui/button';
+import {
+  NetKindGlyph,
+  netKindLabel,
+  netKindOrder,
+  netKindTone,
+} from '../../../components/ui/net-kind-badge';
 import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
-import { NetKindGlyph, netKindLabel, netKindOrder, netKindTone } from './net-kind-badge';
 
 const labelClass = 'text-[11px] font-medium tracking-wider text-ink-faint uppercase';
 
@@ -30,7 +36,13 @@ function Total({ label, value }: { label: string; value: number }) {
 
 const blank = <span className="text-ink-faint">—</span>;
 
-export function BoardHeader({ board }: { board: BoardDetail }) {
+type BoardHeaderProps = {
+  board: BoardDetail;
+  /** the rail search box, placed at the top right */
+  search?: ReactNode;
+};
+
+export function BoardHeader({ board, search }: BoardHeaderProps) {
   const componentKinds = Object.entries(board.componentKindCounts)
     .filter(([, count]) => count > 0)
     .sort(([a, countA], [b, countB]) => countB - countA || naturalCompare(a, b));
@@ -44,6 +56,7 @@ export function BoardHeader({ board }: { board: BoardDetail }) {
           </h1>
           <p className="mt-0.5 font-mono text-xs text-ink-faint">{board.slug}</p>
         </div>
+        {search}
         <LinkButton size="sm" to={paths.boardImport.getHref(board.slug)}>
           Re-import netlist
         </LinkButton>
@@ -62,7 +75,16 @@ export function BoardHeader({ board }: { board: BoardDetail }) {
             {board.batteryVoltage === null ? blank : formatVolts(board.batteryVoltage)}
           </Fact>
           <Fact label="Root net" mono>
-            {board.rootNet ?? blank}
+            {board.rootNet ? (
+              <Link
+                to={paths.net.getHref(board.slug, board.rootNet)}
+                className="hover:text-accent hover:underline"
+              >
+                {board.rootNet}
+              </Link>
+            ) : (
+              blank
+            )}
           </Fact>
         </dl>
         <dl className="flex flex-wrap gap-x-8 gap-y-2">

@@ -4,11 +4,11 @@ import type { NetKind, NetRow } from '@railyard/shared';
 import type { SortingState } from '@tanstack/react-table';
 import { useCallback, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { netKindOrder } from '../../../components/ui/net-kind-badge';
 import { useNets } from '../api/get-nets';
 import { netMatcher } from '../net-search';
 import { NetComponentsPanel } from './net-components-panel';
 import { NetFilterBar } from './net-filter-bar';
-import { netKindOrder } from './net-kind-badge';
 import { netRowsPerPage, NetsTable } from './nets-table';
 
 // Rails first: power and ground nets are what a fault hunt starts from.
@@ -101,6 +101,7 @@ export function BoardNets({ slug }: { slug: string }) {
       />
       <div className="mt-2.5 grid items-start gap-3 lg:grid-cols-[minmax(0,1fr)_30rem] xl:grid-cols-[minmax(0,1fr)_34rem] 2xl:grid-cols-[minmax(0,1fr)_40rem]">
         <NetsTable
+          slug={slug}
           nets={visible}
           sorting={sorting}
           onSortingChange={setSorting}

@@ -1,12 +1,14 @@
 import type { ComponentRow, NetRow } from '@railyard/shared';
 import { Suspense, useMemo, useState } from 'react';
+import { Link } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../../components/errors/error-boundary';
-import { Button } from '../../../components/ui/button';
+import { Button, LinkButton } from '../../../components/ui/button';
 import { Kbd } from '../../../components/ui/kbd';
+import { NetKindBadge } from '../../../components/ui/net-kind-badge';
+import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
 import { useNetComponents } from '../api/get-net-components';
-import { NetKindBadge } from './net-kind-badge';
 
 const componentsPerPage = 150;
 
@@ -132,7 +134,7 @@ export function NetComponentsPanel({ slug, net, onClose }: PanelProps) {
         <p>Pick a net to list the components on it.</p>
         <p className="mt-2 inline-flex items-center gap-1.5 text-xs text-ink-faint">
           <Kbd>↑</Kbd>
-          <Kbd>↓</Kbd> walk the list, <Kbd>/</Kbd> filters
+          <Kbd>↓</Kbd> walk the list, <Kbd>F</Kbd> filters, <Kbd>/</Kbd> finds a rail
         </p>
       </aside>
     );
@@ -148,8 +150,16 @@ export function NetComponentsPanel({ slug, net, onClose }: PanelProps) {
             id="net-panel-title"
             className="min-w-0 flex-1 font-mono text-[15px] font-semibold break-all"
           >
-            {net.name}
+            <Link
+              to={paths.net.getHref(slug, net.name)}
+              className="hover:text-accent hover:underline"
+            >
+              {net.name}
+            </Link>
           </h2>
+          <LinkButton size="sm" to={paths.net.getHref(slug, net.name)}>
+            Power tree and loads
+          </LinkButton>
           <Button
             size="sm"
             variant="ghost"

@@ -2,8 +2,13 @@ import type { NetKind } from '@railyard/shared';
 import { useEffect, useRef } from 'react';
 import { controlClass } from '../../../components/ui/field';
 import { Kbd } from '../../../components/ui/kbd';
+import {
+  NetKindGlyph,
+  netKindLabel,
+  netKindOrder,
+  netKindTone,
+} from '../../../components/ui/net-kind-badge';
 import { formatCount } from '../../../lib/quantity-format';
-import { NetKindGlyph, netKindLabel, netKindOrder, netKindTone } from './net-kind-badge';
 
 function typingInto(target: EventTarget | null): boolean {
   if (!(target instanceof HTMLElement)) return false;
@@ -34,10 +39,11 @@ export function NetFilterBar({
 }: NetFilterBarProps) {
   const inputRef = useRef<HTMLInputElement>(null);
 
-  // "/" jumps to the filter from anywhere on the page, as long as the user is not typing.
+  // "f" jumps to the filter from anywhere on the page, as long as the user is not typing;
+  // "/" belongs to the rail search in the board header, which opens a net's page.
   useEffect(() => {
     const onKey = (event: KeyboardEvent) => {
-      if (event.key !== '/' || event.ctrlKey || event.metaKey || event.altKey) return;
+      if (event.key !== 'f' || event.ctrlKey || event.metaKey || event.altKey) return;
       if (typingInto(event.target)) return;
       event.preventDefault();
       inputRef.current?.focus();
@@ -74,7 +80,7 @@ export function NetFilterBar({
           className={`${controlClass} h-8 pr-8 font-mono text-[13px]`}
         />
         <span className="pointer-events-none absolute top-1/2 right-2 -translate-y-1/2">
-          <Kbd>/</Kbd>
+          <Kbd>F</Kbd>
         </span>
       </div>
 

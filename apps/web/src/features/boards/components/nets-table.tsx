@@ -13,10 +13,12 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { memo, useCallback, useRef, type KeyboardEvent } from 'react';
+import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
+import { NetKindBadge, netKindOrder } from '../../../components/ui/net-kind-badge';
+import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
-import { NetKindBadge, netKindOrder } from './net-kind-badge';
 
 export const netRowsPerPage = 200;
 
@@ -103,6 +105,7 @@ function SortMark({ direction }: { direction: false | 'asc' | 'desc' }) {
 }
 
 type NetsTableProps = {
+  slug: string;
   nets: NetRow[];
   sorting: SortingState;
   onSortingChange: (sorting: SortingState) => void;
@@ -113,6 +116,7 @@ type NetsTableProps = {
 };
 
 export function NetsTable({
+  slug,
   nets,
   sorting,
   onSortingChange,
@@ -144,13 +148,13 @@ export function NetsTable({
     (event: KeyboardEvent<HTMLTableSectionElement>) => {
       const step = rowSteps[event.key];
       if (step === undefined) return;
-      const buttons = Array.from(
-        bodyRef.current?.querySelectorAll<HTMLButtonElement>('button[data-net]') ?? [],
+      const links = Array.from(
+        bodyRef.current?.querySelectorAll<HTMLAnchorElement>('a[data-net]') ?? [],
       );
-      const index = buttons.indexOf(document.activeElement as HTMLButtonElement);
+      const index = links.indexOf(document.activeElement as HTMLAnchorElement);
       if (index < 0) return;
-      const target = Math.min(buttons.length - 1, Math.max(0, index + step));
-      const next = buttons[target];
+      const target = Math.min(links.length - 1, Math.max(0, index + step));
+      const next = links[target];
       if (!next || target === index) return;
       event.preventDefault();
       next.focus();
@@ -204,6 +208,7 @@ export function NetsTable({
             {shown.map((row) => (
               <NetTableRow
                 key={row.id}
+                slug={slug}
                 net={row.original}
                 selected={row.id === selected}
                 tabbable={row.id === tabStop}
@@ -239,11 +244,13 @@ const tdClass = 'h-7 px-2 py-0 align-middle';
 
 // Memoised: typing in the filter re-renders the table, not the rows that did not change.
 const NetTableRow = memo(function NetTableRow({
+  slug,
   net,
   selected,
   tabbable,
   onSelect,
 }: {
+  slug: string;
   net: NetRow;
   selected: boolean;
   tabbable: boolean;
@@ -258,22 +265,20 @@ const NetTableRow = memo(function NetTableRow({
       }`}
     >
       <td className={`${tdClass} pl-1`}>
-        <button
-          type="button"
+        {/* The name opens the net's page; the rest of the row selects it for the side panel. */}
+        <Link
+          to={paths.net.getHref(slug, net.name)}
           data-net={net.name}
           aria-current={selected ? 'true' : undefined}
           tabIndex={tabbable ? 0 : -1}
-          onClick={(event) => {
-            event.stopPropagation();
-            onSelect(net.name);
-          }}
-          title={net.name}
-          className={`block w-full truncate rounded px-1.5 py-0.5 text-left font-mono text-[13px] ${
+          onClick={(event) => event.stopPropagation()}
+          title={`Open ${net.name}`}
+          className={`block w-full truncate rounded px-1.5 py-0.5 text-left font-mono text-[13px] hover:underline ${
             selected ? 'font-medium text-accent' : 'text-ink'
           }`}
         >
           {net.name}
-        </button>
+        </Link>
       </td>
       <td className={tdClass}>
         <NetKindBadge kind={net.kind} />
