@@ -55,3 +55,25 @@ describe('railyard import (CLI)', () => {
     expect(replaced.stdout).toContain(`Replaced ${slug}`);
   });
 });
+
+describe('railyard role (CLI)', () => {
+  it("sets a signed-in user's role and writes an audit row", async () => {
+    const login = `cli-${uniqueSlug('user')}`;
+    const { rows } = await pool.query<{ id: number }>(
+      "INSERT INTO users (github_id, login) VALUES ((random() * 1e9)::bigint + 3e9, $1) RETURNING id",
+      [login],
+    );
+    const result = await cli('role', login, 'admin', '--reason', 'first admin of the shop');
+    expect(result.code, result.stderr).toBe(0);
+    expect(result.stdout).toContain(`${login} is now admin`);
+    const user = await pool.query('SELECT role FROM users WHERE id = $1', [rows[0]!.id]);
+    expect(user.rows[0].role).toBe('admin');
+    const audit = await pool.query("SELECT reason FROM audit_log WHERE action = 'user.role' AND target_id = $1", [String(rows[0]!.id)]);
+    expect(audit.rows).toEqual([{ reason: 'first admin of the shop' }]);
+  });
+
+  it('exits 1 for someone who never signed in and 2 for an unknown role', async () => {
+    expect((await cli('role', 'nobody-here-ever', 'admin')).code).toBe(1);
+    expect((await cli('role', 'nobody-here-ever', 'overlord')).code).toBe(2);
+  });
+});
