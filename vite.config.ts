@@ -15,6 +15,8 @@ export default defineConfig({
   build: {
     outDir: path.resolve(repoRoot, 'dist/web'),
     emptyOutDir: true,
+    // Fonts and images stay files: the CSP allows fonts from this origin only, not data: URIs.
+    assetsInlineLimit: 0,
     rolldownOptions: {
       output: {
         codeSplitting: {
