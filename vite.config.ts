@@ -33,8 +33,12 @@ export default defineConfig({
     },
   },
   server: {
+    // The Host header stays the dev server's, so the API's same-origin checks and OAuth redirects
+    // see the address the browser uses.
     proxy: {
-      '/api': { target: `http://127.0.0.1:${apiPort}`, changeOrigin: true },
+      '/api': { target: `http://127.0.0.1:${apiPort}` },
+      '/auth': { target: `http://127.0.0.1:${apiPort}` },
+      '/fake-github': { target: `http://127.0.0.1:${apiPort}` },
     },
   },
 });

@@ -29,6 +29,7 @@ import {
 const WORKSPACES = [
   'packages/shared',
   'packages/board-analysis',
+  'packages/vote-ranking',
   'apps/api',
   'apps/web',
   'tests',

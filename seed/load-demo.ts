@@ -8,6 +8,7 @@ import { demoAccountIds, demoAccounts } from '../apps/api/src/dev/fake-github/de
 import { createPool } from '../apps/api/src/db/client';
 import { createLogger } from '../apps/api/src/lib/logger';
 import { importFromDisk } from '../apps/api/src/modules/imports/import-files';
+import { loadDemoCases } from './demo-cases';
 import type { ImportsService } from '../apps/api/src/modules/imports/imports.service';
 import type pg from 'pg';
 import type { UserRole } from '@railyard/shared';
@@ -64,22 +65,24 @@ export async function loadDemoUsers(pool: pg.Pool): Promise<string[]> {
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
-  const url = process.env.DATABASE_URL;
-  if (!url) throw new Error('DATABASE_URL is not set');
-  const pool = createPool(url);
+  const env = readEnv(process.env);
+  const pool = createPool(env.DATABASE_URL);
   try {
     const { rows } = await pool.query<{ count: number }>('SELECT count(*)::int AS count FROM boards');
     if ((rows[0]?.count ?? 0) > 0) {
       console.log(`demo data: the database already has ${rows[0]!.count} board(s); nothing loaded`);
     } else {
-      const slugs = await loadDemoBoards(createServices({ pool, logger: createLogger('warn') }).imports);
+      const slugs = await loadDemoBoards(createServices({ env, pool, logger: createLogger('warn') }).imports);
       console.log(`demo data: loaded ${slugs.join(', ')}`);
     }
     // Demo accounts exist only on the local fake GitHub: with a real OAuth app these ids belong to
     // strangers, so no role is ever granted by them there.
-    if (usesFakeGitHub(readEnv(process.env))) {
+    if (usesFakeGitHub(env)) {
       const users = await loadDemoUsers(pool);
       if (users.length > 0) console.log(`demo users: ${users.join(', ')}`);
+      // written by the demo people, so only where they exist
+      const cases = await loadDemoCases(pool);
+      if (cases.length > 0) console.log(`demo cases: ${cases.length} write-ups`);
     }
   } finally {
     await pool.end();

@@ -55,14 +55,24 @@ beforeAll(async () => {
   const link = await t.pool.query('SELECT l.id FROM power_links l JOIN boards b ON b.id = l.board_id WHERE b.slug = $1', [slug]);
   samples[':slug'] = slug;
   samples[':net'] = 'VBAT';
+  samples[':refdes'] = 'U1';
   samples[':id'] = String(link.rows[0].id);
   const fake = t.app.fakeGitHub?.router;
   routes = collectRoutes((t.app as unknown as { router: { stack: StackLayer[] } }).router.stack, '', [fake]);
 });
 afterAll(() => t.close());
 
+// An id that matches no case, comment or attachment: the guard decides first, then the route answers 404.
+// (A real row of someone else's would be refused by the ownership check, which is not what this measures.)
+const unusedId = '2147483000';
+
 function concrete(routePath: string, role: UserRole | 'anonymous', forUser: number): string {
-  return routePath.replace(/:\w+/g, (param) => (param === ':id' && routePath.startsWith('/api/admin/users') ? String(forUser) : samples[param]!));
+  return routePath.replace(/:\w+/g, (param) => {
+    if (param !== ':id') return samples[param]!;
+    if (routePath.startsWith('/api/admin/users')) return String(forUser);
+    if (routePath.includes('/power-links/')) return samples[':id']!;
+    return unusedId;
+  });
 }
 
 function expected(access: Access, role: UserRole | 'anonymous'): 'refused-401' | 'refused-403' | 'allowed' {

@@ -155,17 +155,23 @@ describe('power graph cache', () => {
 
 describe('GET /api/search', () => {
   it('finds VCC_3V3 for "3v3" and VSYS for "vsys", grouped by board', async () => {
-    const three = (await request(app).get('/api/search').query({ q: '3v3', limit: 100 })).body as RailSearchResponse;
-    const ours = three.groups.find((g) => g.board.slug === slug)!;
-    expect(ours.nets.map((n) => n.name)).toContain('VCC_3V3');
-    const vsys = (await request(app).get('/api/search').query({ q: 'vsys', limit: 100 })).body as RailSearchResponse;
-    const hit = vsys.groups.find((g) => g.board.slug === slug)!.nets[0]!;
-    expect(hit.name).toBe('VSYS');
+    const three = (await request(app).get('/api/search').query({ q: '3v3', limit: 100, board: slug })).body as RailSearchResponse;
+    expect(three.groups.map((g) => g.board.slug)).toEqual([slug]);
+    expect(three.groups[0]!.nets.map((n) => n.name)).toContain('VCC_3V3');
+    const vsys = (await request(app).get('/api/search').query({ q: 'vsys', limit: 100, board: slug })).body as RailSearchResponse;
+    expect(vsys.groups[0]!.nets[0]!.name).toBe('VSYS');
+  });
+
+  it('searches across boards, grouping hits by board', async () => {
+    const res = (await request(app).get('/api/search').query({ q: 'VCC_1V8_AUDIO', limit: 100 })).body as RailSearchResponse;
+    const slugs = res.groups.map((g) => g.board.slug);
+    expect(new Set(slugs).size).toBe(slugs.length);
+    expect(res.groups.every((g) => g.nets.length > 0)).toBe(true);
   });
 
   it('tolerates a small typo', async () => {
-    const res = (await request(app).get('/api/search').query({ q: 'vcc_1v8_audoi', limit: 100 })).body as RailSearchResponse;
-    expect(res.groups.find((g) => g.board.slug === slug)?.nets.map((n) => n.name)).toContain('VCC_1V8_AUDIO');
+    const res = (await request(app).get('/api/search').query({ q: 'vcc_1v8_audoi', limit: 100, board: slug })).body as RailSearchResponse;
+    expect(res.groups[0]?.nets.map((n) => n.name)).toContain('VCC_1V8_AUDIO');
   });
 
   it('answers 400 for an empty query', async () => {

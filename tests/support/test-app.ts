@@ -15,7 +15,9 @@ export function testEnv(overrides: Partial<Env> = {}): Env {
   const env = readEnv({ ...process.env, NODE_ENV: 'test', LOG_LEVEL: 'silent', STATIC_DIR: '' });
   // every test signs in and writes from 127.0.0.1: limits high unless a test asks for its own
   const unlimited = { RATE_SIGNIN_PER_15_MIN: 1_000_000, RATE_WRITES_PER_MIN: 1_000_000, RATE_UPLOADS_PER_HOUR: 1_000_000 };
-  return { ...env, ...unlimited, ...overrides };
+  // the outbox worker runs only when a test drives it, so tests do not send each other's mail
+  const quiet = { NOTIFY_INTERVAL_SECONDS: 0 };
+  return { ...env, ...unlimited, ...quiet, ...overrides };
 }
 
 type RailyardApp = ReturnType<typeof createApp>;

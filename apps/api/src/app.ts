@@ -25,9 +25,21 @@ import { createBoardEditsService } from './modules/board-edits/board-edits.servi
 import { createBoardsRepository } from './modules/boards/boards.repository';
 import { boardsRouter } from './modules/boards/boards.routes';
 import { createBoardsService } from './modules/boards/boards.service';
+import { attachmentsRouter } from './modules/attachments/attachments.routes';
+import { createAttachmentsRepository } from './modules/attachments/attachments.repository';
+import { createAttachmentsService } from './modules/attachments/attachments.service';
+import { createLocalDiskStorage } from './modules/attachments/attachment-storage';
+import { createCasebookRepository } from './modules/casebook/casebook.repository';
+import { casebookRouter } from './modules/casebook/casebook.routes';
+import { createCasebookService } from './modules/casebook/casebook.service';
 import { createImportsRepository } from './modules/imports/imports.repository';
 import { importsRouter } from './modules/imports/imports.routes';
 import { createImportsService } from './modules/imports/imports.service';
+import { mailboxRouter } from './dev/mail-catcher/mailbox.routes';
+import { createNotificationDelivery } from './modules/notifications/notification-delivery';
+import { createNotificationsRepository } from './modules/notifications/notifications.repository';
+import { notificationsRouter } from './modules/notifications/notifications.routes';
+import { createNotificationsService } from './modules/notifications/notifications.service';
 import { createPowerGraphCache } from './modules/power-tree/power-graph-cache';
 import { createPowerTreeRepository } from './modules/power-tree/power-tree.repository';
 import { powerTreeRouter } from './modules/power-tree/power-tree.routes';
@@ -42,16 +54,32 @@ export interface AppDeps {
   logger: Logger;
 }
 
-export function createServices({ pool, logger }: Pick<AppDeps, 'pool' | 'logger'>) {
+export function createServices({ env, pool, logger }: AppDeps) {
   const db = createDatabase(pool);
   const boardsRepository = createBoardsRepository(db);
   const graphCache = createPowerGraphCache({ pool, repo: createPowerTreeRepository(db), logger });
   return {
     boards: createBoardsService(boardsRepository),
-    imports: createImportsService({ pool, jobs: createImportsRepository(db), logger }),
+    imports: createImportsService({
+      pool,
+      jobs: createImportsRepository(db),
+      logger,
+      boardChanged: (boardId) => graphCache.drop(boardId),
+    }),
     powerTree: createPowerTreeService({ boards: boardsRepository, cache: graphCache }),
     search: createSearchService(createSearchRepository(db)),
-    boardEdits: createBoardEditsService({ boards: boardsRepository, edits: createBoardEditsRepository(db) }),
+    boardEdits: createBoardEditsService({
+      boards: boardsRepository,
+      edits: createBoardEditsRepository(db),
+      boardChanged: (boardId) => graphCache.drop(boardId),
+    }),
+    casebook: createCasebookService({ boards: boardsRepository, cases: createCasebookRepository(db) }),
+    attachments: createAttachmentsService({
+      repo: createAttachmentsRepository(db),
+      storage: createLocalDiskStorage(env.ATTACHMENTS_DIR),
+      logger,
+    }),
+    notifications: createNotificationsService({ repo: createNotificationsRepository(db) }),
     users: createUsersRepository(db),
     audit: createAuditRepository(db),
     /** releases what the services hold open (the cache's LISTEN connection) */
@@ -64,7 +92,10 @@ function requestOrigin(req: Request): string {
 }
 
 export function createApp({ env, pool, logger }: AppDeps) {
-  const services = createServices({ pool, logger });
+  const services = createServices({ env, pool, logger });
+  // e-mail: the outbox worker, and outside production without SMTP_URL the local mail catcher
+  const delivery = createNotificationDelivery({ env, db: createDatabase(pool), logger });
+  void delivery.start().catch((err) => logger.error({ err }, 'notification delivery did not start'));
   const production = env.NODE_ENV === 'production';
   const app = express();
   app.disable('x-powered-by');
@@ -136,6 +167,17 @@ export function createApp({ env, pool, logger }: AppDeps) {
   api.use(powerTreeRouter(services.powerTree));
   api.use(searchRouter(services.search));
   api.use(boardEditsRouter(services.boardEdits, limits.writes));
+  api.use(casebookRouter(services.casebook, limits.writes));
+  api.use(
+    attachmentsRouter(services.attachments, {
+      maxBytes: env.ATTACHMENT_MAX_BYTES,
+      maxFiles: env.ATTACHMENT_MAX_FILES,
+      uploadLimit: limits.uploads,
+      writeLimit: limits.writes,
+    }),
+  );
+  api.use(notificationsRouter(services.notifications, limits.writes));
+  if (delivery.catcher) api.use(mailboxRouter(delivery.catcher));
   api.use(adminRouter({ users: services.users, audit: services.audit, writeLimit: limits.writes }));
   api.use(notFoundHandler);
   app.use('/api', api);
@@ -150,5 +192,9 @@ export function createApp({ env, pool, logger }: AppDeps) {
   }
 
   app.use(errorHandler(logger));
-  return Object.assign(app, { shutdown: services.close, fakeGitHub: fake, limits });
+  const shutdown = async () => {
+    await delivery.stop();
+    await services.close();
+  };
+  return Object.assign(app, { shutdown, fakeGitHub: fake, limits, notifications: delivery });
 }

@@ -8,6 +8,7 @@ import {
   type ImportIssue,
 } from '@railyard/shared';
 import { createServices } from './app';
+import { readEnv } from './config/env';
 import { createPool } from './db/client';
 import { AppError } from './lib/app-error';
 import { createLogger } from './lib/logger';
@@ -28,15 +29,15 @@ function printIssues(label: string, issues: ImportIssue[]) {
 
 /** Runs a command with the services on DATABASE_URL, and closes the pool after it. */
 async function withServices(run: (services: ReturnType<typeof createServices>) => Promise<void>) {
-  const databaseUrl = process.env.DATABASE_URL;
-  if (!databaseUrl) {
+  if (!process.env.DATABASE_URL) {
     console.error('DATABASE_URL is not set (npm run railyard sets it for the local cluster).');
     process.exitCode = 2;
     return;
   }
-  const pool = createPool(databaseUrl);
+  const env = readEnv(process.env);
+  const pool = createPool(env.DATABASE_URL);
   try {
-    await run(createServices({ pool, logger: createLogger('warn') }));
+    await run(createServices({ env, pool, logger: createLogger('warn') }));
   } finally {
     await pool.end();
   }

@@ -8,9 +8,13 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
+import { meQueryKey } from './features/auth/api/get-me';
 import { createQueryClient } from './lib/query-client';
 
-const queryClient = createQueryClient();
+const queryClient = createQueryClient({
+  // The answer said the session is not what the page believed: ask again who is signed in.
+  onSessionChanged: (client) => void client.invalidateQueries({ queryKey: meQueryKey }),
+});
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');

@@ -5,3 +5,4 @@ export * from './api-error';
 export * from './power-tree';
 export * from './auth';
 export * from './board-edits';
+export * from './casebook';

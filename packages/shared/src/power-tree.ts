@@ -122,6 +122,8 @@ export type NetDetail = z.infer<typeof netDetailSchema>;
 export const railSearchQuerySchema = z.strictObject({
   q: z.string().trim().min(1, 'type part of a rail name').max(100),
   limit: z.coerce.number().int().min(1).max(100).default(20),
+  /** only this board's rails */
+  board: boardSlugSchema.optional(),
 });
 
 export const railSearchResponseSchema = z.object({

@@ -2,9 +2,9 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useMemo, type ComponentType } from 'react';
 import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { RouteError } from '../components/errors/route-error';
-import { AppShell } from '../components/layout/app-shell';
 import { PageLoading } from '../components/layout/page-loading';
 import { paths } from '../config/paths';
+import { AppLayout } from './app-layout';
 
 /** A route module's page and, when it has one, the loader that prefetches its queries. */
 type RouteModule = {
@@ -31,13 +31,24 @@ function lazyPage(queryClient: QueryClient, load: () => Promise<RouteModule>) {
 export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     {
-      Component: AppShell,
+      Component: AppLayout,
       ErrorBoundary: RouteError,
       children: [
         { index: true, ...lazyPage(queryClient, () => import('./routes/boards')) },
         { path: paths.boards.path, ...lazyPage(queryClient, () => import('./routes/boards')) },
         { path: paths.board.path, ...lazyPage(queryClient, () => import('./routes/board')) },
         { path: paths.net.path, ...lazyPage(queryClient, () => import('./routes/net')) },
+        {
+          path: paths.boardCases.path,
+          ...lazyPage(queryClient, () => import('./routes/board-cases')),
+        },
+        { path: paths.newCase.path, ...lazyPage(queryClient, () => import('./routes/new-case')) },
+        { path: paths.case.path, ...lazyPage(queryClient, () => import('./routes/case')) },
+        { path: paths.editCase.path, ...lazyPage(queryClient, () => import('./routes/edit-case')) },
+        {
+          path: paths.caseHistory.path,
+          ...lazyPage(queryClient, () => import('./routes/case-history')),
+        },
         {
           path: paths.boardImport.path,
           ...lazyPage(queryClient, () => import('./routes/board-import')),
@@ -47,6 +58,7 @@ export function createAppRouter(queryClient: QueryClient) {
           ...lazyPage(queryClient, () => import('./routes/new-board-import')),
         },
         { path: paths.search.path, ...lazyPage(queryClient, () => import('./routes/search')) },
+        { path: paths.admin.path, ...lazyPage(queryClient, () => import('./routes/admin')) },
         { path: '*', ...lazyPage(queryClient, () => import('./routes/not-found')) },
       ],
     },

@@ -17,6 +17,36 @@ export const paths = {
       `/boards/${encodeURIComponent(slug)}/nets/${encodeURIComponent(net)}`,
   },
   newBoardImport: { path: '/import', getHref: () => '/import' },
+  /** A board's casebook; `filters` become the query string the list page reads back. */
+  boardCases: {
+    path: '/boards/:slug/cases',
+    getHref: (slug: string, filters?: Record<string, string>) => {
+      const query = new URLSearchParams(filters).toString();
+      return `/boards/${encodeURIComponent(slug)}/cases${query ? `?${query}` : ''}`;
+    },
+  },
+  /** A new case on a board, optionally starting with nets and parts already picked. */
+  newCase: {
+    path: '/boards/:slug/cases/new',
+    getHref: (slug: string, preset?: { net?: string; component?: string }) => {
+      const query = new URLSearchParams(
+        Object.entries(preset ?? {}).filter((entry): entry is [string, string] => !!entry[1]),
+      ).toString();
+      return `/boards/${encodeURIComponent(slug)}/cases/new${query ? `?${query}` : ''}`;
+    },
+  },
+  case: { path: '/cases/:id', getHref: (id: number) => `/cases/${id}` },
+  editCase: { path: '/cases/:id/edit', getHref: (id: number) => `/cases/${id}/edit` },
+  caseHistory: { path: '/cases/:id/history', getHref: (id: number) => `/cases/${id}/history` },
+  admin: { path: '/admin', getHref: () => '/admin' },
+  /**
+   * The server's sign-in, not a client route: a full-page navigation (a plain link) that comes
+   * back to `returnTo`, a path on this site.
+   */
+  signIn: {
+    path: '/auth/github',
+    getHref: (returnTo: string) => `/auth/github?${new URLSearchParams({ returnTo }).toString()}`,
+  },
   search: {
     path: '/search',
     getHref: (query?: string) =>

@@ -1,5 +1,7 @@
 // The one way the client talks to the API: JSON over fetch, uploads over XMLHttpRequest
 // (fetch cannot report upload progress). Every failure becomes an ApiError.
+// Writes are same-origin requests (the browser adds `Sec-Fetch-Site: same-origin`, which the API's
+// cross-site guard requires) and carry their body as application/json (the API answers 415 otherwise).
 import type { ApiError as ApiErrorBody } from '@railyard/shared';
 
 const apiBase = '/api';
@@ -29,6 +31,20 @@ export class ApiError extends Error {
       if (typeof message !== 'string') return [];
       return [{ field: typeof field === 'string' ? field : null, message }];
     });
+  }
+
+  /**
+   * Messages by the request field they belong to: the field a refusal names (`details.field`, e.g.
+   * an unknown net in `to`) and every validation issue with a field. The first message per field wins.
+   */
+  get fieldErrors(): Partial<Record<string, string>> {
+    const errors: Partial<Record<string, string>> = {};
+    const named = (this.details as { field?: unknown } | undefined)?.field;
+    if (typeof named === 'string' && named !== '') errors[named] = this.message;
+    for (const issue of this.issues) {
+      if (issue.field !== null) errors[issue.field] ??= issue.message;
+    }
+    return errors;
   }
 }
 
@@ -80,15 +96,17 @@ function url(path: string, params?: QueryParams): string {
   return `${apiBase}${path}${query ? `?${query}` : ''}`;
 }
 
-async function get<T>(
-  path: string,
-  options: { params?: QueryParams; signal?: AbortSignal } = {},
-): Promise<T> {
+type RequestOptions = { params?: QueryParams; signal?: AbortSignal };
+
+async function request<T>(method: string, path: string, init: RequestInit & RequestOptions) {
+  const { params, ...rest } = init;
   let response: Response;
   try {
-    response = await fetch(url(path, options.params), {
-      headers: { Accept: 'application/json' },
-      signal: options.signal,
+    response = await fetch(url(path, params), {
+      ...rest,
+      method,
+      // Explicit, though it is fetch's default: the session cookie goes only to this origin.
+      credentials: 'same-origin',
     });
   } catch (error) {
     if (error instanceof DOMException && error.name === 'AbortError') throw error;
@@ -97,6 +115,26 @@ async function get<T>(
   const body = parseJson(await response.text());
   if (!response.ok) throw errorFromResponse(response.status, response.statusText, body);
   return body as T;
+}
+
+function get<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  return request<T>('GET', path, { ...options, headers: { Accept: 'application/json' } });
+}
+
+/** A state-changing request; `body`, when given, is sent as JSON. A 204 resolves to undefined. */
+function send<T>(
+  method: 'POST' | 'PUT' | 'PATCH' | 'DELETE',
+  path: string,
+  body?: unknown,
+  options: RequestOptions = {},
+): Promise<T> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  return request<T>(method, path, {
+    ...options,
+    headers,
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
 }
 
 export type UploadProgress = { loaded: number; total: number };
@@ -129,4 +167,15 @@ function upload<T>(
   });
 }
 
-export const api = { get, upload };
+export const api = {
+  get,
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    send<T>('POST', path, body, options),
+  put: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    send<T>('PUT', path, body, options),
+  patch: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    send<T>('PATCH', path, body, options),
+  delete: <T = void>(path: string, options?: RequestOptions) =>
+    send<T>('DELETE', path, undefined, options),
+  upload,
+};

@@ -3,8 +3,13 @@ import { AppError } from '../../lib/app-error';
 import type { BoardsRepository } from '../boards/boards.repository';
 import type { BoardEditsRepository } from './board-edits.repository';
 
-export function createBoardEditsService(deps: { boards: BoardsRepository; edits: BoardEditsRepository }) {
-  const { boards, edits } = deps;
+export function createBoardEditsService(deps: {
+  boards: BoardsRepository;
+  edits: BoardEditsRepository;
+  /** drops this process's cached power graph at once (other processes hear the database notification) */
+  boardChanged: (boardId: number) => void;
+}) {
+  const { boards, edits, boardChanged } = deps;
 
   async function requireBoard(slug: string) {
     const board = await boards.findBoard(slug);
@@ -40,6 +45,7 @@ export function createBoardEditsService(deps: { boards: BoardsRepository; edits:
       }
       const label = `${input.kind} ${from.name} → ${to.name} via ${input.via}`;
       const id = await edits.addLink({ boardId: board.id, fromId: from.id, toId: to.id, viaId, via: input.via, kind: input.kind, actorId, reason: input.reason, label });
+      boardChanged(board.id);
       return (await edits.listLinks(board.id, null)).find((l) => l.id === id)!;
     },
 
@@ -47,6 +53,7 @@ export function createBoardEditsService(deps: { boards: BoardsRepository; edits:
       const board = await requireBoard(slug);
       const removed = await edits.removeLink(board.id, linkId, actorId, reason);
       if (!removed) throw AppError.notFound(`Power link ${linkId} on board "${slug}"`);
+      boardChanged(board.id);
     },
 
     async updateNet(slug: string, netName: string, change: NetUpdate, actorId: number) {
@@ -54,6 +61,7 @@ export function createBoardEditsService(deps: { boards: BoardsRepository; edits:
       const net = await requireNet(board.id, slug, netName);
       const { reason, ...fields } = change;
       await edits.updateNet(board.id, net.id, fields, actorId, reason);
+      boardChanged(board.id);
       const updated = (await boards.listNets(board.id)).find((n) => n.name === net.name)!;
       return updated;
     },
@@ -62,6 +70,7 @@ export function createBoardEditsService(deps: { boards: BoardsRepository; edits:
       const board = await requireBoard(slug);
       const net = await requireNet(board.id, slug, netName, 'net');
       await edits.setRoot(board.id, net.id, actorId, reason, { from: board.rootNet, to: net.name });
+      boardChanged(board.id);
       return { rootNet: net.name };
     },
   };

@@ -126,8 +126,14 @@ export function prepareImport(input: ImportInput): PreparedImport {
   return { format, draft, meta, rootFromFile: Boolean(annotations?.rootNet) };
 }
 
-export function createImportsService(deps: { pool: pg.Pool; jobs: ImportsRepository; logger: Logger }) {
-  const { pool, jobs, logger } = deps;
+export function createImportsService(deps: {
+  pool: pg.Pool;
+  jobs: ImportsRepository;
+  logger: Logger;
+  /** drops this process's cached power graph at once (other processes hear the database notification) */
+  boardChanged?: (boardId: number) => void;
+}) {
+  const { pool, jobs, logger, boardChanged } = deps;
 
   async function boardExists(slug: string): Promise<boolean> {
     const result = await pool.query('SELECT 1 FROM boards WHERE slug = $1', [slug]);
@@ -158,6 +164,7 @@ export function createImportsService(deps: { pool: pg.Pool; jobs: ImportsReposit
         onProgress,
       });
       await client.query('COMMIT');
+      boardChanged?.(summary.boardId);
       await progressChain;
       const { boardId, warnings, ...rest } = summary;
       return await jobs.finishJob(job.id, { status: 'succeeded', boardId, summary: rest, warnings });

@@ -65,6 +65,10 @@ export async function storeBoardDraft(client: PoolClient, request: StoreRequest)
   let dropped: string[] = [];
   let enteredByLink = new Map<object, string | null>();
   let rootEntered = request.rootFromFile;
+  let previousCaseLinks: {
+    nets: { case_id: number; name: string }[];
+    parts: { case_id: number; refdes: string; culprit: boolean }[];
+  } = { nets: [], parts: [] };
 
   // Two imports of the same slug must not interleave.
   await client.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`board:${slug}`]);
@@ -82,6 +86,17 @@ export async function storeBoardDraft(client: PoolClient, request: StoreRequest)
     dropped = carried.dropped;
     enteredByLink = carried.enteredBy;
     rootEntered = request.rootFromFile || (previous.enteredRoot !== null && draft.rootNet === previous.enteredRoot);
+    // Case write-ups link to nets and parts by id; keep their names to link them again below.
+    const caseNets = await client.query<{ case_id: number; name: string }>(
+      `SELECT cn.case_id, n.name FROM case_nets cn JOIN nets n ON n.id = cn.net_id WHERE n.board_id = $1`,
+      [boardId],
+    );
+    const caseParts = await client.query<{ case_id: number; refdes: string; culprit: boolean }>(
+      `SELECT cc.case_id, c.refdes, cc.culprit FROM case_components cc JOIN components c ON c.id = cc.component_id
+       WHERE c.board_id = $1`,
+      [boardId],
+    );
+    previousCaseLinks = { nets: caseNets.rows, parts: caseParts.rows };
     onProgress('removing the previous netlist', 0.15);
     await client.query('UPDATE boards SET root_net_id = NULL WHERE id = $1', [boardId]);
     await client.query('DELETE FROM power_links WHERE board_id = $1', [boardId]);
@@ -186,6 +201,22 @@ export async function storeBoardDraft(client: PoolClient, request: StoreRequest)
     draft.rootNet === null ? null : (netId.get(draft.rootNet) ?? null),
     rootEntered && draft.rootNet !== null,
   ]);
+  // Case links follow their nets and parts by name; a link whose net or part is gone is reported.
+  for (const link of previousCaseLinks.nets) {
+    const id = netId.get(link.name);
+    if (id === undefined) dropped.push(`link of case ${link.case_id} to net ${link.name}: the net is not in the new netlist`);
+    else await client.query('INSERT INTO case_nets (case_id, net_id) VALUES ($1, $2) ON CONFLICT DO NOTHING', [link.case_id, id]);
+  }
+  for (const link of previousCaseLinks.parts) {
+    const id = componentId.get(link.refdes);
+    if (id === undefined) dropped.push(`link of case ${link.case_id} to part ${link.refdes}: the part is not in the new netlist`);
+    else
+      await client.query(
+        'INSERT INTO case_components (case_id, component_id, culprit) VALUES ($1, $2, $3) ON CONFLICT DO NOTHING',
+        [link.case_id, id, link.culprit],
+      );
+  }
+
   // delivered at commit: every API process drops its cached power graph of this board
   await client.query(`SELECT pg_notify('${boardChangedChannel}', $1::text)`, [String(board)]);
   onProgress('finishing', 0.97);

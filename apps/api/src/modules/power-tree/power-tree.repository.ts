@@ -1,4 +1,5 @@
-// Loads what the power graph is built from: one board's nets, power links, parts and pins.
+// Loads what the power graph is built from: one board's nets, power links, parts and pins; and which
+// board a slug names.
 import { sql } from 'drizzle-orm';
 import type { PowerGraphInput } from '@railyard/board-analysis';
 import type { BoardSide, ComponentKind, NetKind, PowerLinkKind, PowerLinkOrigin } from '@railyard/shared';
@@ -6,6 +7,11 @@ import type { Database } from '../../db/client';
 
 export function createPowerTreeRepository(db: Database) {
   return {
+    async findBoardId(slug: string): Promise<number | null> {
+      const result = await db.execute<{ id: number }>(sql`SELECT id FROM boards WHERE slug = ${slug}`);
+      return result.rows[0]?.id ?? null;
+    },
+
     async loadGraphInput(boardId: number): Promise<PowerGraphInput> {
       const [nets, links, parts, pins, root] = await Promise.all([
         db.execute<{ id: number; name: string; kind: NetKind; nominal_voltage: number | null }>(

@@ -11,7 +11,7 @@ export function powerTreeRouter(service: PowerTreeService): Router {
   router.get('/boards/:slug/tree', async (req, res) => {
     const slug = boardSlugSchema.parse(req.params.slug);
     const query = treeQuerySchema.parse(req.query);
-    res.json(await service.getTree(slug, null, query.direction, query.depth));
+    res.type('json').send(await service.getTreeJson(slug, null, query.direction, query.depth));
   });
 
   router.get('/boards/:slug/nets/:net', async (req, res) => {
@@ -22,7 +22,8 @@ export function powerTreeRouter(service: PowerTreeService): Router {
   router.get('/boards/:slug/nets/:net/tree', async (req, res) => {
     const slug = boardSlugSchema.parse(req.params.slug);
     const query = treeQuerySchema.parse(req.query);
-    res.json(await service.getTree(slug, netNameSchema.parse(req.params.net), query.direction, query.depth));
+    const net = netNameSchema.parse(req.params.net);
+    res.type('json').send(await service.getTreeJson(slug, net, query.direction, query.depth));
   });
 
   return router;

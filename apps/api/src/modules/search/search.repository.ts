@@ -20,18 +20,21 @@ function likePattern(key: string): string {
 
 export function createSearchRepository(db: Database) {
   return {
-    async searchRails(key: string, limit: number): Promise<RailHit[]> {
+    async searchRails(key: string, limit: number, board?: string): Promise<RailHit[]> {
       const pattern = likePattern(key);
+      // the board column sits in the same GIN index as the name (btree_gin)
+      const onBoard = board === undefined ? sql`` : sql`AND n.board_id = (SELECT id FROM boards WHERE slug = ${board})`;
+      const aliasOnBoard = board === undefined ? sql`` : sql`AND a.board_id = (SELECT id FROM boards WHERE slug = ${board})`;
       // exact key first, then prefix, then substring, then trigram similarity
       const result = await db.execute<RailHit>(sql`
         WITH matches AS (
           SELECT n.id AS net_id, NULL::text AS alias, n.normalized_name AS key
           FROM nets n
-          WHERE n.normalized_name % ${key} OR n.normalized_name LIKE ${pattern}
+          WHERE (n.normalized_name % ${key} OR n.normalized_name LIKE ${pattern}) ${onBoard}
           UNION ALL
           SELECT a.net_id, a.alias, a.normalized_alias
           FROM net_aliases a
-          WHERE a.normalized_alias % ${key} OR a.normalized_alias LIKE ${pattern}
+          WHERE (a.normalized_alias % ${key} OR a.normalized_alias LIKE ${pattern}) ${aliasOnBoard}
         ),
         scored AS (
           SELECT net_id, alias,

@@ -4,10 +4,10 @@ import type { SearchRepository } from './search.repository';
 
 export function createSearchService(repo: SearchRepository) {
   return {
-    async searchRails(query: string, limit: number): Promise<RailSearchResponse> {
+    async searchRails(query: string, limit: number, board?: string): Promise<RailSearchResponse> {
       const key = normalizeNetName(query);
       if (key === '') return { query, groups: [] };
-      const hits = await repo.searchRails(key, limit);
+      const hits = await repo.searchRails(key, limit, board);
       const groups = new Map<string, RailSearchResponse['groups'][number]>();
       for (const hit of hits) {
         let group = groups.get(hit.slug);

@@ -4,6 +4,7 @@ import { useCallback } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/layout/page-header';
 import { paths } from '../../config/paths';
+import { RoleGate } from '../../features/auth/components/role-gate';
 import { boardQueryKey, boardQueryOptions, useBoard } from '../../features/boards/api/get-board';
 import { boardsQueryKey } from '../../features/boards/api/get-boards';
 import { ImportForm } from '../../features/imports/components/import-form';
@@ -41,10 +42,12 @@ export default function BoardImportRoute() {
         }
         description="A board keeps one netlist. To load a new revision of it, tick “Replace the netlist”."
       />
-      <ImportForm
-        target={{ kind: 'existing', slug, title: board.title, netCount: board.netCount }}
-        onSucceeded={onSucceeded}
-      />
+      <RoleGate needed="admin" action="Importing boards">
+        <ImportForm
+          target={{ kind: 'existing', slug, title: board.title, netCount: board.netCount }}
+          onSucceeded={onSucceeded}
+        />
+      </RoleGate>
     </div>
   );
 }

@@ -2,6 +2,8 @@ import type { QueryClient } from '@tanstack/react-query';
 import { PageHeader } from '../../components/layout/page-header';
 import { LinkButton } from '../../components/ui/button';
 import { paths } from '../../config/paths';
+import { hasRole } from '../../lib/roles';
+import { useSignedInUser } from '../../features/auth/api/get-me';
 import { boardsQueryOptions } from '../../features/boards/api/get-boards';
 import { BoardList } from '../../features/boards/components/board-list';
 
@@ -11,6 +13,8 @@ export const clientLoader = (queryClient: QueryClient) => async () => {
 };
 
 export default function BoardsRoute() {
+  // Importing needs the admin role; the API checks it again.
+  const canImport = hasRole(useSignedInUser(), 'admin');
   return (
     <div className="mx-auto max-w-6xl px-4 py-5">
       <title>Boards · Railyard</title>
@@ -18,12 +22,14 @@ export default function BoardsRoute() {
         title="Boards"
         description="Every imported board with its nets, parts and the rail power enters by."
         actions={
-          <LinkButton variant="primary" size="sm" to={paths.newBoardImport.getHref()}>
-            Import a board
-          </LinkButton>
+          canImport && (
+            <LinkButton variant="primary" size="sm" to={paths.newBoardImport.getHref()}>
+              Import a board
+            </LinkButton>
+          )
         }
       />
-      <BoardList />
+      <BoardList canImport={canImport} />
     </div>
   );
 }

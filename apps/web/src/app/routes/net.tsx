@@ -5,7 +5,9 @@ import { useCallback } from 'react';
 import { redirect, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { paths } from '../../config/paths';
+import { useSignedInUser } from '../../features/auth/api/get-me';
 import { boardQueryOptions, useBoard } from '../../features/boards/api/get-board';
+import { NetCasesPanel } from '../../features/casebook/components/net-cases-panel';
 import { netsQueryOptions } from '../../features/boards/api/get-nets';
 import {
   netDetailQueryKey,
@@ -21,8 +23,10 @@ import {
   PowerTreeSection,
   preloadPowerTreeGraph,
 } from '../../features/power-tree/components/power-tree-section';
+import { RailEditPanel } from '../../features/power-tree/components/rail-edit-panel';
 import { RailPartsTable } from '../../features/power-tree/components/rail-parts-table';
 import { RailSearchBox } from '../../features/rails/components/rail-search-box';
+import { hasRole } from '../../lib/roles';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -61,6 +65,9 @@ export default function NetRoute() {
   const nets = useQuery(netsQueryOptions(slug)).data?.nets;
   const navigate = useNavigate();
   const net = detail.net;
+  // Editing is for moderators and admins; the API checks the role again on every edit.
+  const user = useSignedInUser();
+  const canEdit = hasRole(user, 'moderator');
 
   const openRail = useCallback(
     (rail: string) => {
@@ -80,9 +87,22 @@ export default function NetRoute() {
         </SectionErrorBoundary>
         <div className="space-y-3">
           <CoupledGroupPanel slug={slug} net={net.name} group={detail.coupledGroup} />
+          <SectionErrorBoundary title="Could not show the cases" resetKeys={[slug, net.name]}>
+            <NetCasesPanel slug={slug} net={net.name} />
+          </SectionErrorBoundary>
           <InjectionCaution nominalVoltage={net.nominalVoltage} />
           <PowerLinksPanel slug={slug} linksIn={detail.linksIn} linksOut={detail.linksOut} />
         </div>
+        {canEdit && (
+          <div className="min-w-0 xl:col-span-2">
+            <RailEditPanel
+              slug={slug}
+              detail={detail}
+              nets={nets}
+              currentUserId={user?.id ?? null}
+            />
+          </div>
+        )}
         <div className="min-w-0 xl:col-span-2">
           <SectionErrorBoundary title="Could not list the parts" resetKeys={[slug, net.name]}>
             {/* Keyed by net: filters and order start fresh on another rail. */}

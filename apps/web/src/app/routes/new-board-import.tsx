@@ -2,6 +2,7 @@ import type { ImportJob } from '@railyard/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { PageHeader } from '../../components/layout/page-header';
+import { RoleGate } from '../../features/auth/components/role-gate';
 import { boardsQueryKey } from '../../features/boards/api/get-boards';
 import { ImportForm } from '../../features/imports/components/import-form';
 
@@ -18,7 +19,9 @@ export default function NewBoardImportRoute() {
         title="Import a new board"
         description="Name the board, then upload its netlist. Parts list and annotations can come now or with a later import."
       />
-      <ImportForm target={{ kind: 'new' }} onSucceeded={onSucceeded} />
+      <RoleGate needed="admin" action="Importing boards">
+        <ImportForm target={{ kind: 'new' }} onSucceeded={onSucceeded} />
+      </RoleGate>
     </div>
   );
 }

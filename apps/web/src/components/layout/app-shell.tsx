@@ -1,4 +1,4 @@
-import { Suspense } from 'react';
+import { Suspense, type ReactNode } from 'react';
 import {
   Form,
   Link,
@@ -41,7 +41,16 @@ function TopSearch() {
   );
 }
 
-export function AppShell() {
+type AppShellProps = {
+  /** the account corner of the top bar: sign-in, or who is signed in */
+  account?: ReactNode;
+  /** a notice across the top of every page, e.g. why a sign-in did not work */
+  notice?: ReactNode;
+  /** whether the top bar offers "Import" (only roles that may import see it) */
+  canImport?: boolean;
+};
+
+export function AppShell({ account, notice, canImport = false }: AppShellProps) {
   const navigation = useNavigation();
   const { pathname } = useLocation();
   // The home page is the board list, so "Boards" is lit there too.
@@ -66,17 +75,20 @@ export function AppShell() {
             >
               Boards
             </NavLink>
-            <NavLink
-              to={paths.newBoardImport.getHref()}
-              className={({ isActive }) => navClass(isActive)}
-            >
-              Import
-            </NavLink>
+            {canImport && (
+              <NavLink
+                to={paths.newBoardImport.getHref()}
+                className={({ isActive }) => navClass(isActive)}
+              >
+                Import
+              </NavLink>
+            )}
           </nav>
           <div className="ml-auto flex items-center gap-3">
             {/* The search page has its own, larger field. */}
             {pathname !== paths.search.path && <TopSearch />}
             <ThemeToggle />
+            {account}
           </div>
         </div>
         {navigation.state !== 'idle' && (
@@ -85,6 +97,7 @@ export function AppShell() {
           </div>
         )}
       </header>
+      {notice}
       <main id="main" className="flex-1" tabIndex={-1}>
         <Suspense fallback={<PageLoading />}>
           <Outlet />

@@ -1,7 +1,7 @@
 import type { ButtonHTMLAttributes } from 'react';
 import { Link, type LinkProps } from 'react-router-dom';
 
-type Variant = 'primary' | 'secondary' | 'ghost';
+type Variant = 'primary' | 'secondary' | 'ghost' | 'danger';
 type Size = 'sm' | 'md';
 
 const variants: Record<Variant, string> = {
@@ -9,6 +9,9 @@ const variants: Record<Variant, string> = {
     'bg-accent text-accent-ink border-transparent hover:brightness-110 disabled:hover:brightness-100',
   secondary: 'bg-raised text-ink border-line hover:border-line-strong',
   ghost: 'bg-transparent text-ink-muted border-transparent hover:bg-raised hover:text-ink',
+  // For what takes something away (a ban, a removed link): only on the button that confirms it.
+  danger:
+    'bg-danger text-canvas border-transparent hover:brightness-110 disabled:hover:brightness-100',
 };
 
 const sizes: Record<Size, string> = {

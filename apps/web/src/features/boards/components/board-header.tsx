@@ -40,9 +40,11 @@ type BoardHeaderProps = {
   board: BoardDetail;
   /** the rail search box, placed at the top right */
   search?: ReactNode;
+  /** whether the viewer may import (admins): only then is "Re-import" offered */
+  canImport?: boolean;
 };
 
-export function BoardHeader({ board, search }: BoardHeaderProps) {
+export function BoardHeader({ board, search, canImport = false }: BoardHeaderProps) {
   const componentKinds = Object.entries(board.componentKindCounts)
     .filter(([, count]) => count > 0)
     .sort(([a, countA], [b, countB]) => countB - countA || naturalCompare(a, b));
@@ -57,9 +59,14 @@ export function BoardHeader({ board, search }: BoardHeaderProps) {
           <p className="mt-0.5 font-mono text-xs text-ink-faint">{board.slug}</p>
         </div>
         {search}
-        <LinkButton size="sm" to={paths.boardImport.getHref(board.slug)}>
-          Re-import netlist
+        <LinkButton size="sm" to={paths.boardCases.getHref(board.slug)}>
+          Cases
         </LinkButton>
+        {canImport && (
+          <LinkButton size="sm" to={paths.boardImport.getHref(board.slug)}>
+            Re-import netlist
+          </LinkButton>
+        )}
       </div>
 
       <div className="mt-3 flex flex-wrap items-end gap-x-10 gap-y-3">

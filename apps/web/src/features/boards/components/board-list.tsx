@@ -11,7 +11,7 @@ function Identity({ board }: { board: BoardSummary }) {
   return <span className="text-ink-muted">{text || 'No device family or board number'}</span>;
 }
 
-function EmptyBoards() {
+function EmptyBoards({ canImport }: { canImport: boolean }) {
   return (
     <div className="rounded-lg border border-dashed border-line-strong bg-surface px-6 py-10 text-center">
       <h2 className="text-base font-semibold">No boards yet</h2>
@@ -19,9 +19,13 @@ function EmptyBoards() {
         A board appears here once its netlist is imported: an IPC-D-356 file, a pin-list CSV or a
         Railyard board JSON, with an optional parts list and annotations.
       </p>
-      <LinkButton variant="primary" className="mt-4" to={paths.newBoardImport.getHref()}>
-        Import a netlist
-      </LinkButton>
+      {canImport ? (
+        <LinkButton variant="primary" className="mt-4" to={paths.newBoardImport.getHref()}>
+          Import a netlist
+        </LinkButton>
+      ) : (
+        <p className="mt-3 text-[13px] text-ink-faint">Importing boards needs the admin role.</p>
+      )}
     </div>
   );
 }
@@ -31,10 +35,11 @@ const numHeadClass = `${headClass} text-right`;
 const cellClass = 'px-3 py-2 align-baseline';
 const numCellClass = `${cellClass} text-right font-mono tabular text-[13px]`;
 
-export function BoardList() {
+/** `canImport`: whether the viewer may import (admins), so the empty list offers it. */
+export function BoardList({ canImport }: { canImport: boolean }) {
   const { data } = useBoards();
   const boards = data.boards;
-  if (boards.length === 0) return <EmptyBoards />;
+  if (boards.length === 0) return <EmptyBoards canImport={canImport} />;
 
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface">

@@ -5,6 +5,7 @@ import type { SortingState } from '@tanstack/react-table';
 import { useCallback, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { netKindOrder } from '../../../components/ui/net-kind-badge';
+import { toggled } from '../../../lib/toggled';
 import { useNets } from '../api/get-nets';
 import { netMatcher } from '../net-search';
 import { NetComponentsPanel } from './net-components-panel';
@@ -79,9 +80,7 @@ export function BoardNets({ slug }: { slug: string }) {
 
   const toggleKind = useCallback((kind: NetKind) => {
     setKinds((current) => {
-      const next = new Set(current);
-      if (next.has(kind)) next.delete(kind);
-      else next.add(kind);
+      const next = toggled(current, kind);
       // Every kind on is the same as no kind filter; show it as "All".
       return next.size === netKindOrder.length ? new Set() : next;
     });

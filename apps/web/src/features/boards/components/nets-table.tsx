@@ -9,13 +9,13 @@ import {
   getCoreRowModel,
   getSortedRowModel,
   useReactTable,
-  type Header,
   type SortingState,
 } from '@tanstack/react-table';
 import { memo, useCallback, useRef, type KeyboardEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
 import { NetKindBadge, netKindOrder } from '../../../components/ui/net-kind-badge';
+import { ariaSort, SortMark } from '../../../components/ui/sort-mark';
 import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
@@ -88,21 +88,6 @@ const columnWidths: Record<string, string> = {
   aliases: 'w-[11rem]',
   description: 'w-auto',
 };
-
-function ariaSort(header: Header<NetRow, unknown>) {
-  if (!header.column.getCanSort()) return undefined;
-  const sorted = header.column.getIsSorted();
-  return sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none';
-}
-
-function SortMark({ direction }: { direction: false | 'asc' | 'desc' }) {
-  return (
-    <svg viewBox="0 0 8 12" width="7" height="11" aria-hidden="true" className="shrink-0">
-      <path d="M4 1 7 4.5H1Z" fill="currentColor" opacity={direction === 'asc' ? 1 : 0.25} />
-      <path d="M4 11 1 7.5h6Z" fill="currentColor" opacity={direction === 'desc' ? 1 : 0.25} />
-    </svg>
-  );
-}
 
 type NetsTableProps = {
   slug: string;

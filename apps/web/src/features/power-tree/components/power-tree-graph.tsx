@@ -116,6 +116,27 @@ function fitReadable(cy: Core, focus: NodeSingular | null) {
   }
 }
 
+// The canvas has no DOM of its own to query, so its container carries a plain description of
+// the drawing: each rail drawn with its model position, the rails lit, and the viewport that maps
+// model positions to the screen (x · zoom + pan). Browser tests read it; it costs one string per
+// layout or highlight change, and a tiny one per viewport change.
+function describeDrawing(cy: Core, element: HTMLElement) {
+  const rails: Record<string, [number, number]> = {};
+  cy.nodes('.rail').forEach((node) => {
+    const { x, y } = node.position();
+    rails[node.data('net') as string] = [Math.round(x), Math.round(y)];
+  });
+  element.dataset.rails = JSON.stringify(rails);
+  element.dataset.selectedRail =
+    (cy.nodes('.rail.selected').first().data('net') as string | undefined) ?? '';
+  element.dataset.pathRails = JSON.stringify(cy.nodes('.rail.on-path').map((n) => n.data('net')));
+}
+
+function describeViewport(cy: Core, element: HTMLElement) {
+  const { x, y } = cy.pan();
+  element.dataset.viewport = JSON.stringify({ zoom: cy.zoom(), x, y });
+}
+
 export function PowerTreeGraph({
   shape,
   highlight,
@@ -225,6 +246,9 @@ export function PowerTreeGraph({
         callbacks.current.onToggleRail(net);
       });
       const container = cy.container();
+      cy.on('viewport', () => {
+        if (wrapper.current) describeViewport(cy, wrapper.current);
+      });
       cy.on('mouseover', 'node', (event) => {
         if (!container) return;
         const net = event.target.data('net') as string;
@@ -254,6 +278,14 @@ export function PowerTreeGraph({
   useLayoutEffect(() => {
     if (cyRef.current && !cyRef.current.destroyed()) layOut(cyRef.current);
   }, [layOut]);
+
+  // After cytoscape has patched in the new elements (a child's updates run before this effect).
+  useEffect(() => {
+    const cy = cyRef.current;
+    if (!cy || cy.destroyed() || !wrapper.current) return;
+    describeDrawing(cy, wrapper.current);
+    describeViewport(cy, wrapper.current);
+  }, [elements]);
 
   // Another rail selected from outside (search, a link): bring it into view if it is off screen.
   useEffect(() => {

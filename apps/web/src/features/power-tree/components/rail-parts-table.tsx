@@ -7,15 +7,16 @@ import {
   getCoreRowModel,
   getSortedRowModel,
   useReactTable,
-  type Header,
   type SortingState,
 } from '@tanstack/react-table';
 import { Fragment, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
+import { ariaSort, SortMark } from '../../../components/ui/sort-mark';
 import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatFarads } from '../../../lib/quantity-format';
+import { toggled } from '../../../lib/toggled';
 import { loadRolesInOrder } from '../tree-elements';
 
 export const roleHint: Record<LoadRole, string> = {
@@ -85,28 +86,6 @@ const columnWidths: Record<string, string> = {
   pins: 'w-[6rem]',
   otherNets: 'w-auto',
 };
-
-function ariaSort(header: Header<RailPart, unknown>) {
-  if (!header.column.getCanSort()) return undefined;
-  const sorted = header.column.getIsSorted();
-  return sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none';
-}
-
-function SortMark({ direction }: { direction: false | 'asc' | 'desc' }) {
-  return (
-    <svg viewBox="0 0 8 12" width="7" height="11" aria-hidden="true" className="shrink-0">
-      <path d="M4 1 7 4.5H1Z" fill="currentColor" opacity={direction === 'asc' ? 1 : 0.25} />
-      <path d="M4 11 1 7.5h6Z" fill="currentColor" opacity={direction === 'desc' ? 1 : 0.25} />
-    </svg>
-  );
-}
-
-function toggled<T>(set: ReadonlySet<T>, value: T): Set<T> {
-  const next = new Set(set);
-  if (next.has(value)) next.delete(value);
-  else next.add(value);
-  return next;
-}
 
 function Chips<T extends string>({
   label,

@@ -1,0 +1,60 @@
+// Rows of case_attachments, and the little of a case the attachment rules need (its author and status).
+import { asc, eq } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { caseAttachments } from '../../db/schema/attachments';
+import { cases } from '../../db/schema/casebook';
+
+export type AttachmentRow = typeof caseAttachments.$inferSelect;
+export type NewAttachmentRow = typeof caseAttachments.$inferInsert;
+
+export interface CaseAccess {
+  id: number;
+  authorId: number;
+  status: (typeof cases.$inferSelect)['status'];
+}
+
+export function createAttachmentsRepository(db: Database) {
+  return {
+    async findCase(caseId: number): Promise<CaseAccess | null> {
+      const rows = await db
+        .select({ id: cases.id, authorId: cases.authorId, status: cases.status })
+        .from(cases)
+        .where(eq(cases.id, caseId));
+      return rows[0] ?? null;
+    },
+
+    /** All rows of one upload in one transaction: either every file of it is listed or none. */
+    async insertMany(rows: NewAttachmentRow[]): Promise<AttachmentRow[]> {
+      return db.transaction(async (tx) => tx.insert(caseAttachments).values(rows).returning());
+    },
+
+    async listForCase(caseId: number): Promise<AttachmentRow[]> {
+      return db
+        .select()
+        .from(caseAttachments)
+        .where(eq(caseAttachments.caseId, caseId))
+        .orderBy(asc(caseAttachments.createdAt), asc(caseAttachments.id));
+    },
+
+    async findWithCase(
+      id: number,
+    ): Promise<{ attachment: AttachmentRow; case: CaseAccess } | null> {
+      const rows = await db
+        .select({
+          attachment: caseAttachments,
+          case: { id: cases.id, authorId: cases.authorId, status: cases.status },
+        })
+        .from(caseAttachments)
+        .innerJoin(cases, eq(cases.id, caseAttachments.caseId))
+        .where(eq(caseAttachments.id, id));
+      return rows[0] ?? null;
+    },
+
+    async delete(id: number): Promise<AttachmentRow | null> {
+      const rows = await db.delete(caseAttachments).where(eq(caseAttachments.id, id)).returning();
+      return rows[0] ?? null;
+    },
+  };
+}
+
+export type AttachmentsRepository = ReturnType<typeof createAttachmentsRepository>;

@@ -1,0 +1,126 @@
+import { Router, type Request, type RequestHandler } from 'express';
+import { z } from 'zod';
+import {
+  boardSlugSchema,
+  caseConfirmationInputSchema,
+  caseCreateSchema,
+  idParamSchema,
+  caseListQuerySchema,
+  casePageQuerySchema,
+  caseUpdateSchema,
+  caseVoteInputSchema,
+  commentDeleteQuerySchema,
+  commentInputSchema,
+  commentUpdateSchema,
+  similarCasesQuerySchema,
+} from '@railyard/shared';
+import { requireJsonBody } from '../../middleware/csrf-guard';
+import { requireRole } from '../../middleware/require-role';
+import type { CasebookService, Viewer } from './casebook.service';
+
+const netName = z.string().min(1).max(200);
+const refdes = z.string().min(1).max(64);
+
+const viewer = (req: Request): Viewer => (req.user ? { id: req.user.id, role: req.user.role } : null);
+const idParam = (req: Request) => idParamSchema.parse(req.params.id);
+
+export function casebookRouter(service: CasebookService, writeLimit: RequestHandler): Router {
+  const router = Router();
+  // the role guard comes first on every write, so 401 and 403 are decided before the body is read
+  const member = requireRole('member');
+
+  router.get('/boards/:slug/cases/similar', async (req, res) => {
+    const slug = boardSlugSchema.parse(req.params.slug);
+    res.json(await service.similar(slug, similarCasesQuerySchema.parse(req.query), viewer(req)));
+  });
+
+  router.get('/boards/:slug/cases', async (req, res) => {
+    const slug = boardSlugSchema.parse(req.params.slug);
+    res.json(await service.list(slug, caseListQuerySchema.parse(req.query), viewer(req)));
+  });
+
+  router.post('/boards/:slug/cases', member, writeLimit, requireJsonBody, async (req, res) => {
+    const slug = boardSlugSchema.parse(req.params.slug);
+    const created = await service.create(slug, caseCreateSchema.parse(req.body), req.user!);
+    res.status(201).location(`/api/cases/${created.id}`).json({ case: created });
+  });
+
+  router.get('/boards/:slug/nets/:net/cases', async (req, res) => {
+    const slug = boardSlugSchema.parse(req.params.slug);
+    res.json(await service.listForNet(slug, netName.parse(req.params.net), casePageQuerySchema.parse(req.query), viewer(req)));
+  });
+
+  router.get('/boards/:slug/components/:refdes/cases', async (req, res) => {
+    const slug = boardSlugSchema.parse(req.params.slug);
+    const page = casePageQuerySchema.parse(req.query);
+    res.json(await service.listForComponent(slug, refdes.parse(req.params.refdes), page, viewer(req)));
+  });
+
+  router.get('/cases/:id', async (req, res) => {
+    res.json({ case: await service.get(idParam(req), viewer(req)) });
+  });
+
+  router.patch('/cases/:id', member, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    res.json({ case: await service.update(id, caseUpdateSchema.parse(req.body), req.user!) });
+  });
+
+  router.delete('/cases/:id', member, writeLimit, async (req, res) => {
+    await service.remove(idParam(req), req.user!);
+    res.status(204).end();
+  });
+
+  router.get('/cases/:id/revisions', async (req, res) => {
+    res.json(await service.revisions(idParam(req), viewer(req)));
+  });
+
+  router.put('/cases/:id/vote', member, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    const { value } = caseVoteInputSchema.parse(req.body);
+    res.json(await service.vote(id, value, req.user!));
+  });
+
+  router.delete('/cases/:id/vote', member, writeLimit, async (req, res) => {
+    res.json(await service.removeVote(idParam(req), req.user!));
+  });
+
+  router.get('/cases/:id/confirmations', async (req, res) => {
+    res.json(await service.confirmations(idParam(req), viewer(req)));
+  });
+
+  router.post('/cases/:id/confirmation', member, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    const { note } = caseConfirmationInputSchema.parse(req.body);
+    const { created, score } = await service.confirm(id, note, req.user!);
+    res.status(created ? 201 : 200).json({ score });
+  });
+
+  router.delete('/cases/:id/confirmation', member, writeLimit, async (req, res) => {
+    res.json(await service.removeConfirmation(idParam(req), req.user!));
+  });
+
+  router.get('/cases/:id/comments', async (req, res) => {
+    res.json(await service.comments(idParam(req), viewer(req)));
+  });
+
+  router.post('/cases/:id/comments', member, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    const { body } = commentInputSchema.parse(req.body);
+    res.status(201).json({ comment: await service.addComment(id, body, req.user!) });
+  });
+
+  router.patch('/comments/:id', member, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    const { body, reason } = commentUpdateSchema.parse(req.body);
+    res.json({ comment: await service.editComment(id, body, reason, req.user!) });
+  });
+
+  router.delete('/comments/:id', member, writeLimit, async (req, res) => {
+    const id = idParam(req);
+    const { reason } = commentDeleteQuerySchema.parse(req.query);
+    await service.deleteComment(id, reason, req.user!);
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,475 @@
+// The casebook's rules: who may see, edit, vote on and comment on a case; readings and links checked
+// against the board; a revision with each change; votes ranked by the Wilson bound.
+import { normalizeNetName } from '@railyard/board-analysis';
+import {
+  roleAtLeast,
+  type CaseComment,
+  type CaseConfirmation,
+  type CaseCreate,
+  type CaseDetail,
+  type CaseListQuery,
+  type CaseListResponse,
+  type CasePageQuery,
+  type CaseRevision,
+  type CaseRevisionSnapshot,
+  type CaseScore,
+  type CaseSort,
+  type CaseUpdate,
+  type SessionUser,
+  type SimilarCase,
+  type SimilarCasesQuery,
+} from '@railyard/shared';
+import { caseEvidence, caseRankScore, reputation } from '@railyard/vote-ranking';
+import { AppError } from '../../lib/app-error';
+import type { BoardsRepository } from '../boards/boards.repository';
+import type { CaseFields, CaseLinks, CaseRecord, CaseScorer, CasebookRepository } from './casebook.repository';
+import { nameCandidates, renderCaseMarkdown, type BoardNames } from './case-markdown';
+
+/** Who is asking: null when signed out. */
+export type Viewer = Pick<SessionUser, 'id' | 'role'> | null;
+
+const scorer: CaseScorer = (votes, confirmedBy) => {
+  const evidence = caseEvidence(votes, confirmedBy);
+  return { ups: evidence.ups, downs: evidence.downs, confirmations: evidence.confirmations, rankScore: caseRankScore(evidence) };
+};
+
+/** Field names as people read them, in the order revisions list them. */
+const fieldLabels: Record<keyof CaseRevisionSnapshot, string> = {
+  status: 'status',
+  title: 'title',
+  symptom: 'symptom',
+  rootCause: 'root cause',
+  fixSteps: 'fix steps',
+  body: 'write-up',
+  outcome: 'outcome',
+  minutesSpent: 'time spent',
+  readings: 'readings',
+  nets: 'nets',
+  components: 'parts',
+};
+const snapshotKeys = Object.keys(fieldLabels) as (keyof CaseRevisionSnapshot)[];
+
+function sentenceList(items: string[]): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`;
+}
+
+function invalid(issues: { field: string; message: string }[]): AppError {
+  return new AppError(400, 'invalid_request', 'The request is not valid', { issues });
+}
+
+const forbidden = (message: string) => new AppError(403, 'forbidden', message);
+const caseNotFound = (id: number) => AppError.notFound(`Case ${id}`);
+
+export function createCasebookService(deps: { boards: BoardsRepository; cases: CasebookRepository }) {
+  const { boards, cases } = deps;
+
+  async function requireBoard(slug: string) {
+    const board = await boards.findBoard(slug);
+    if (!board) throw AppError.notFound(`Board "${slug}"`);
+    return board;
+  }
+
+  /** A case the viewer may see: drafts only to their author; anything else is "not found". */
+  async function visibleCase(id: number, viewer: Viewer): Promise<CaseRecord> {
+    const record = await cases.findCase(id);
+    if (!record || (record.status === 'draft' && record.authorId !== viewer?.id)) throw caseNotFound(id);
+    return record;
+  }
+
+  /** A published case someone other than its author acts on: votes and confirmations. */
+  async function othersPublishedCase(id: number, viewer: SessionUser, what: 'vote' | 'confirmation'): Promise<CaseRecord> {
+    const record = await visibleCase(id, viewer);
+    if (record.authorId === viewer.id) {
+      throw new AppError(403, 'own_case', what === 'vote' ? 'You cannot vote on your own case' : 'You cannot confirm your own case');
+    }
+    if (record.status !== 'published') {
+      throw new AppError(409, 'not_published', what === 'vote' ? 'Only published cases take votes' : 'Only published cases can be confirmed');
+    }
+    return record;
+  }
+
+  async function boardNamesFor(boardId: number, slug: string, ...texts: string[]): Promise<BoardNames> {
+    // a bounded lookup, whatever the length of the text
+    const candidates = nameCandidates(...texts).slice(0, 5000);
+    const found = await cases.boardNamesAmong(boardId, candidates);
+    return { slug, nets: found.nets, refdes: found.refdes };
+  }
+
+  /** Readings, nets and parts checked against the board, every unknown name reported with its field. */
+  async function resolveLinks(
+    boardId: number,
+    slug: string,
+    input: Pick<CaseCreate, 'readings' | 'nets' | 'components'>,
+  ): Promise<CaseLinks> {
+    const issues: { field: string; message: string }[] = [];
+    const netNames = [...new Set([...input.nets, ...input.readings.map((r) => r.net)])];
+    const netRows = await cases.resolveNets(boardId, netNames, netNames.map(normalizeNetName));
+    const findNet = (name: string) => {
+      const exact = netRows.find((r) => r.alias === null && r.name === name) ?? netRows.find((r) => r.alias === name);
+      if (exact) return { id: exact.id, name: exact.name };
+      const byKey = new Map(netRows.filter((r) => r.normalized_name === normalizeNetName(name)).map((r) => [r.id, r]));
+      // a separator-insensitive match only counts when it names one net
+      const only = byKey.size === 1 ? [...byKey.values()][0]! : null;
+      return only ? { id: only.id, name: only.name } : null;
+    };
+    const linked = new Map<number, { id: number; name: string }>();
+    input.nets.forEach((name, index) => {
+      const net = findNet(name);
+      if (net) linked.set(net.id, net);
+      else issues.push({ field: `nets.${index}`, message: `${name} is not a net of board "${slug}"` });
+    });
+    const readings = input.readings.map((reading, index) => {
+      const net = findNet(reading.net);
+      if (!net) {
+        issues.push({ field: `readings.${index}.net`, message: `${reading.net} is not a net of board "${slug}"` });
+        return reading;
+      }
+      // a net that was measured is a net the case is about
+      linked.set(net.id, net);
+      return { ...reading, net: net.name };
+    });
+
+    const partRows = await cases.resolveComponents(boardId, input.components.map((c) => c.refdes));
+    const parts = new Map<number, { id: number; refdes: string; culprit: boolean }>();
+    input.components.forEach((component, index) => {
+      const row =
+        partRows.find((r) => r.refdes === component.refdes) ??
+        partRows.find((r) => r.refdes.toUpperCase() === component.refdes.toUpperCase());
+      if (!row) {
+        issues.push({ field: `components.${index}.refdes`, message: `${component.refdes} is not a part of board "${slug}"` });
+      } else if (parts.has(row.id)) {
+        issues.push({ field: `components.${index}.refdes`, message: `part ${row.refdes} is listed twice` });
+      } else {
+        parts.set(row.id, { id: row.id, refdes: row.refdes, culprit: component.culprit });
+      }
+    });
+    if (issues.length > 0) throw invalid(issues);
+
+    const nets = [...linked.values()].sort((a, b) => a.name.localeCompare(b.name));
+    const components = [...parts.values()].sort((a, b) => Number(b.culprit) - Number(a.culprit) || a.refdes.localeCompare(b.refdes));
+    return {
+      readings,
+      nets,
+      components,
+      // names a full-text search should find the case by, beside its text
+      searchText: [...nets.map((n) => n.name), ...components.map((c) => c.refdes)].join(' '),
+    };
+  }
+
+  interface LinkNames {
+    readings: CaseLinks['readings'];
+    nets: { name: string }[];
+    components: { refdes: string; culprit: boolean }[];
+  }
+
+  function snapshotOf(fields: CaseFields, links: LinkNames): CaseRevisionSnapshot {
+    return {
+      ...fields,
+      readings: links.readings.map((r) => ({ net: r.net, mode: r.mode, measured: r.measured, knownGood: r.knownGood })),
+      nets: links.nets.map((n) => n.name),
+      components: links.components.map((c) => ({ refdes: c.refdes, culprit: c.culprit })),
+    };
+  }
+
+  async function currentLinks(record: CaseRecord): Promise<LinkNames> {
+    const [readings, nets, components] = await Promise.all([
+      cases.readingsOf(record.id),
+      cases.netLinksOf(record.id),
+      cases.componentsOf(record.id),
+    ]);
+    return {
+      readings: readings.map((r) => ({ net: r.net, mode: r.mode, measured: r.measured, knownGood: r.knownGood })),
+      nets,
+      components,
+    };
+  }
+
+  const fieldsOf = (record: CaseRecord): CaseFields => ({
+    status: record.status,
+    title: record.title,
+    symptom: record.symptom,
+    rootCause: record.rootCause,
+    fixSteps: record.fixSteps,
+    body: record.body,
+    outcome: record.outcome,
+    minutesSpent: record.minutesSpent,
+  });
+
+  async function detail(record: CaseRecord, viewer: Viewer): Promise<CaseDetail> {
+    const [summary, readings, components, received, names] = await Promise.all([
+      cases.summaryOf(record.id, viewer?.id ?? null),
+      cases.readingsOf(record.id),
+      cases.componentsOf(record.id),
+      cases.receivedBy(record.authorId),
+      boardNamesFor(record.boardId, record.boardSlug, record.rootCause, record.fixSteps, record.body),
+    ]);
+    if (!summary) throw caseNotFound(record.id);
+    return {
+      ...summary,
+      author: { ...summary.author, reputation: reputation(received) },
+      rootCause: record.rootCause,
+      fixSteps: record.fixSteps,
+      body: record.body,
+      html: {
+        rootCause: renderCaseMarkdown(record.rootCause, names),
+        fixSteps: renderCaseMarkdown(record.fixSteps, names),
+        body: renderCaseMarkdown(record.body, names),
+      },
+      readings,
+      components,
+    };
+  }
+
+  async function scoreOf(id: number, viewer: Viewer): Promise<CaseScore> {
+    const summary = await cases.summaryOf(id, viewer?.id ?? null);
+    if (!summary) throw caseNotFound(id);
+    return summary.score;
+  }
+
+  async function renderComments(record: CaseRecord, comments: Omit<CaseComment, 'html'>[]): Promise<CaseComment[]> {
+    const names = await boardNamesFor(record.boardId, record.boardSlug, ...comments.map((c) => c.body));
+    return comments.map((c) => ({ ...c, html: renderCaseMarkdown(c.body, names) }));
+  }
+
+  /** The comment and its case, when the viewer may change it: its author, or a moderator for anyone's. */
+  async function changeableComment(commentId: number, viewer: SessionUser, action: string) {
+    const comment = await cases.findComment(commentId);
+    if (!comment || comment.deleted) throw AppError.notFound(`Comment ${commentId}`);
+    const record = await visibleCase(comment.caseId, viewer);
+    const own = comment.authorId === viewer.id;
+    if (!own && !roleAtLeast(viewer.role, 'moderator')) throw forbidden(`You can only ${action} your own comments`);
+    return { comment, record, own };
+  }
+
+  function paging(query: CasePageQuery) {
+    return { limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
+  }
+
+  return {
+    async create(slug: string, input: CaseCreate, author: SessionUser): Promise<CaseDetail> {
+      const board = await requireBoard(slug);
+      const links = await resolveLinks(board.id, board.slug, input);
+      const { readings: _r, nets: _n, components: _c, ...fields } = input;
+      const id = await cases.insertCase({
+        boardId: board.id,
+        authorId: author.id,
+        fields,
+        links,
+        revision: {
+          editorId: author.id,
+          snapshot: snapshotOf(fields, links),
+          changed: [...snapshotKeys],
+          summary: fields.status === 'published' ? 'written and published' : 'written as a draft',
+        },
+      });
+      return detail((await cases.findCase(id))!, author);
+    },
+
+    async get(id: number, viewer: Viewer): Promise<CaseDetail> {
+      return detail(await visibleCase(id, viewer), viewer);
+    },
+
+    async update(id: number, change: CaseUpdate, editor: SessionUser): Promise<CaseDetail> {
+      const record = await visibleCase(id, editor);
+      if (record.authorId !== editor.id) throw forbidden('Only the author can edit a case');
+      if (record.status === 'published' && change.status === 'draft') {
+        throw new AppError(409, 'already_published', 'A published case cannot go back to draft', { field: 'status' });
+      }
+      const before = await currentLinks(record);
+      const linksChanged = change.readings !== undefined || change.nets !== undefined || change.components !== undefined;
+      const links = linksChanged
+        ? await resolveLinks(record.boardId, record.boardSlug, {
+            readings: change.readings ?? before.readings,
+            // a net stays linked until the author replaces the list, even when it came in with a reading
+            nets: change.nets ?? before.nets.map((n) => n.name),
+            components: change.components ?? before.components,
+          })
+        : null;
+      const { readings: _r, nets: _n, components: _c, ...fieldChange } = change;
+      const fields: CaseFields = { ...fieldsOf(record), ...fieldChange };
+      const oldSnapshot = snapshotOf(fieldsOf(record), before);
+      const newSnapshot = snapshotOf(fields, links ?? before);
+      const changed = snapshotKeys.filter((key) => JSON.stringify(oldSnapshot[key]) !== JSON.stringify(newSnapshot[key]));
+      if (changed.length === 0) return detail(record, editor);
+      const publish = record.status === 'draft' && fields.status === 'published';
+      const edits = changed.filter((key) => key !== 'status').map((key) => fieldLabels[key]);
+      const summary = [publish ? 'published' : '', edits.length > 0 ? `changed ${sentenceList(edits)}` : '']
+        .filter((part) => part !== '')
+        .join('; ');
+      await cases.updateCase(id, {
+        fields,
+        links,
+        publish,
+        revision: { editorId: editor.id, snapshot: newSnapshot, changed, summary },
+      });
+      return detail((await cases.findCase(id))!, editor);
+    },
+
+    async remove(id: number, user: SessionUser): Promise<void> {
+      const record = await visibleCase(id, user);
+      if (record.authorId !== user.id) throw forbidden('Only the author can delete a case');
+      if (record.status === 'published') {
+        throw new AppError(409, 'already_published', 'A published case cannot be deleted: others may have voted on it, confirmed it or commented');
+      }
+      await cases.deleteCase(id);
+    },
+
+    async revisions(id: number, viewer: Viewer): Promise<{ caseId: number; revisions: CaseRevision[] }> {
+      await visibleCase(id, viewer);
+      return { caseId: id, revisions: await cases.revisionsOf(id) };
+    },
+
+    async list(slug: string, query: CaseListQuery, viewer: Viewer): Promise<CaseListResponse> {
+      const board = await requireBoard(slug);
+      const sort: CaseSort = query.sort ?? (query.q ? 'relevance' : 'rank');
+      if (sort === 'relevance' && !query.q) throw invalid([{ field: 'sort', message: 'sort by relevance needs a search text (q)' }]);
+      if (query.status === 'draft' && !viewer) throw new AppError(401, 'sign_in_required', 'Sign in to see your drafts');
+      let netId: number | undefined;
+      if (query.net !== undefined) {
+        const net = await boards.findNet(board.id, query.net);
+        if (!net) throw AppError.notFound(`Net "${query.net}" on board "${slug}"`);
+        netId = net.id;
+      }
+      let componentId: number | undefined;
+      if (query.component !== undefined) {
+        const component = await cases.findComponent(board.id, query.component);
+        if (!component) throw AppError.notFound(`Component "${query.component}" on board "${slug}"`);
+        componentId = component.id;
+      }
+      const { total, cases: found } = await cases.listCases(
+        {
+          boardId: board.id,
+          status: query.status,
+          authorId: query.status === 'draft' ? viewer!.id : undefined,
+          netId,
+          componentId,
+          outcome: query.outcome,
+          q: query.q,
+        },
+        sort,
+        paging(query),
+        viewer?.id ?? null,
+      );
+      return { board: board.slug, page: query.page, pageSize: query.pageSize, total, sort, cases: found };
+    },
+
+    async listForNet(slug: string, netName: string, page: CasePageQuery, viewer: Viewer) {
+      const board = await requireBoard(slug);
+      const net = await boards.findNet(board.id, netName);
+      if (!net) throw AppError.notFound(`Net "${netName}" on board "${slug}"`);
+      const found = await cases.listCases({ boardId: board.id, status: 'published', netId: net.id }, 'rank', paging(page), viewer?.id ?? null);
+      return { board: board.slug, net: net.name, page: page.page, pageSize: page.pageSize, ...found };
+    },
+
+    async listForComponent(slug: string, refdes: string, page: CasePageQuery, viewer: Viewer) {
+      const board = await requireBoard(slug);
+      const component = await cases.findComponent(board.id, refdes);
+      if (!component) throw AppError.notFound(`Component "${refdes}" on board "${slug}"`);
+      const [found, solvedAsCulprit] = await Promise.all([
+        cases.listCases({ boardId: board.id, status: 'published', componentId: component.id }, 'rank', paging(page), viewer?.id ?? null),
+        cases.solvedAsCulprit(component.id),
+      ]);
+      return { board: board.slug, refdes: component.refdes, solvedAsCulprit, page: page.page, pageSize: page.pageSize, ...found };
+    },
+
+    async similar(slug: string, query: SimilarCasesQuery, viewer: Viewer): Promise<{ board: string; cases: SimilarCase[] }> {
+      const board = await requireBoard(slug);
+      const names = query.nets ?? [];
+      // unknown names are simply not matched: the form asks while the technician is still typing
+      const netRows = await cases.resolveNets(board.id, names, names.map(normalizeNetName));
+      const partRows = await cases.resolveComponents(board.id, query.components ?? []);
+      const found = await cases.similarCases({
+        boardId: board.id,
+        netIds: [...new Set(netRows.map((r) => r.id))],
+        componentIds: partRows.map((r) => r.id),
+        text: query.text ?? '',
+        excludeId: query.exclude ?? null,
+        limit: query.limit,
+        viewerId: viewer?.id ?? null,
+      });
+      return { board: board.slug, cases: found };
+    },
+
+    async vote(id: number, value: 1 | -1, user: SessionUser): Promise<{ score: CaseScore }> {
+      await othersPublishedCase(id, user, 'vote');
+      await cases.setVote(id, user.id, value, scorer);
+      return { score: await scoreOf(id, user) };
+    },
+
+    async removeVote(id: number, user: SessionUser): Promise<{ score: CaseScore }> {
+      await othersPublishedCase(id, user, 'vote');
+      await cases.removeVote(id, user.id, scorer);
+      return { score: await scoreOf(id, user) };
+    },
+
+    async confirm(id: number, note: string, user: SessionUser): Promise<{ created: boolean; score: CaseScore }> {
+      await othersPublishedCase(id, user, 'confirmation');
+      const created = await cases.setConfirmation(id, user.id, note, scorer);
+      return { created, score: await scoreOf(id, user) };
+    },
+
+    async removeConfirmation(id: number, user: SessionUser): Promise<{ score: CaseScore }> {
+      await othersPublishedCase(id, user, 'confirmation');
+      await cases.removeConfirmation(id, user.id, scorer);
+      return { score: await scoreOf(id, user) };
+    },
+
+    async confirmations(id: number, viewer: Viewer): Promise<{ caseId: number; confirmations: CaseConfirmation[] }> {
+      await visibleCase(id, viewer);
+      return { caseId: id, confirmations: await cases.confirmationsOf(id) };
+    },
+
+    async comments(id: number, viewer: Viewer): Promise<{ caseId: number; comments: CaseComment[] }> {
+      const record = await visibleCase(id, viewer);
+      return { caseId: id, comments: await renderComments(record, await cases.commentsOf(id)) };
+    },
+
+    async addComment(id: number, body: string, user: SessionUser): Promise<CaseComment> {
+      const record = await visibleCase(id, user);
+      if (record.status !== 'published') throw new AppError(409, 'not_published', 'Only published cases take comments');
+      const commentId = await cases.insertComment(id, user.id, body);
+      const [comment] = await renderComments(record, [(await cases.commentById(commentId))!]);
+      return comment!;
+    },
+
+    async editComment(commentId: number, body: string, reason: string, user: SessionUser): Promise<CaseComment> {
+      const { comment, record, own } = await changeableComment(commentId, user, 'edit');
+      await cases.updateComment(
+        commentId,
+        body,
+        own
+          ? null
+          : {
+              actorId: user.id,
+              action: 'comment.edit',
+              targetType: 'comment',
+              targetId: String(commentId),
+              reason,
+              details: { case: record.id, author: comment.authorId, before: comment.body, after: body },
+            },
+      );
+      const [updated] = await renderComments(record, [(await cases.commentById(commentId))!]);
+      return updated!;
+    },
+
+    async deleteComment(commentId: number, reason: string, user: SessionUser): Promise<void> {
+      const { comment, record, own } = await changeableComment(commentId, user, 'delete');
+      await cases.deleteComment(
+        commentId,
+        own
+          ? null
+          : {
+              actorId: user.id,
+              action: 'comment.delete',
+              targetType: 'comment',
+              targetId: String(commentId),
+              reason,
+              details: { case: record.id, author: comment.authorId, body: comment.body },
+            },
+      );
+    },
+  };
+}
+
+export type CasebookService = ReturnType<typeof createCasebookService>;

@@ -1,0 +1,3 @@
+export * from './wilson-score';
+export * from './case-evidence';
+export * from './reputation';
