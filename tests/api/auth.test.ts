@@ -195,6 +195,17 @@ describe('the security baseline', () => {
     expect(res.status).toBe(415);
   });
 
+  it('never takes a role from a profile update (ASVS V8.2.2, mass assignment)', async () => {
+    const member = await t.agentAs('member');
+    const res = await member.put('/api/me/notifications').send({ mode: 'off', role: 'admin' });
+    expect(res.status).toBe(400);
+    const ok = await member.put('/api/me/notifications').send({ mode: 'off' });
+    expect(ok.status).toBe(200);
+    expect((await member.get('/api/me')).body.user.role).toBe('member');
+    const { rows } = await t.pool.query('SELECT role FROM users WHERE id = $1', [member.user.id]);
+    expect(rows[0].role).toBe('member');
+  });
+
   it('rejects unknown fields in a request body', async () => {
     const admin = await t.agentAs('admin');
     const member = await t.agentAs('member');
