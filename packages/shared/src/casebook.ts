@@ -231,7 +231,18 @@ export const caseReadingSchema = z.object({
 });
 export type CaseReading = z.infer<typeof caseReadingSchema>;
 
+/** Moderation state of a case; hidden cases reach only moderators and their author. */
+export const caseModerationStateSchema = z.object({
+  lockedAt: z.string().nullable(),
+  hiddenAt: z.string().nullable(),
+  /** why a moderator hid it; empty when it is not hidden */
+  hiddenReason: z.string(),
+});
+export type CaseModerationState = z.infer<typeof caseModerationStateSchema>;
+
 export const caseDetailSchema = caseSummarySchema.extend({
+  /** always sent by the API (optional only for older clients' fixtures) */
+  moderation: caseModerationStateSchema.optional(),
   rootCause: z.string(),
   fixSteps: z.string(),
   body: z.string(),
@@ -301,8 +312,38 @@ export const caseCommentSchema = z.object({
   createdAt: z.string(),
   editedAt: z.string().nullable(),
   deleted: z.boolean(),
+  /** set when a moderator hid it (only moderators and the comment's author receive hidden comments) */
+  hidden: z.object({ at: z.string(), reason: z.string() }).nullable().optional(),
 });
 export type CaseComment = z.infer<typeof caseCommentSchema>;
+
+/** Why a moderator locks, hides, restores or resolves, or why a member flags: kept in the audit log. */
+const requiredReason = z.string().trim().min(3, 'say why, in a few words').max(500);
+
+export const moderationInputSchema = z.strictObject({ reason: requiredReason });
+export type ModerationInput = z.infer<typeof moderationInputSchema>;
+
+export const flagContentTypes = ['case', 'comment'] as const;
+export const flagStatuses = ['open', 'resolved'] as const;
+
+export const flagListQuerySchema = z.strictObject({ status: z.enum(flagStatuses).default('open') });
+export type FlagListQuery = z.infer<typeof flagListQuerySchema>;
+
+export const caseFlagSchema = z.object({
+  id: z.number().int(),
+  contentType: z.enum(flagContentTypes),
+  contentId: z.number().int(),
+  /** the flagged case, or the case of the flagged comment */
+  caseId: z.number().int().nullable(),
+  flagger: casePersonSchema,
+  reason: z.string(),
+  status: z.enum(flagStatuses),
+  resolver: casePersonSchema.nullable(),
+  resolution: z.string(),
+  createdAt: z.string(),
+  resolvedAt: z.string().nullable(),
+});
+export type CaseFlag = z.infer<typeof caseFlagSchema>;
 
 export const caseConfirmationSchema = z.object({
   caseId: z.number().int(),

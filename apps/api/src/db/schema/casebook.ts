@@ -1,7 +1,8 @@
 // The casebook: repair write-ups on a board with their readings, linked nets and parts, revisions,
-// votes, confirmations and comments.
+// votes, confirmations and comments, and moderation (locks, hidden content, flags, merges).
 import { sql } from 'drizzle-orm';
 import {
+  type AnyPgColumn,
   boolean,
   check,
   customType,
@@ -63,6 +64,13 @@ export const cases = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     publishedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /** a locked case takes no new comments, votes or edits */
+    lockedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /** a hidden case is visible only to moderators and its author */
+    hiddenAt: timestamp({ withTimezone: true, mode: 'date' }),
+    hiddenReason: text().notNull().default(''),
+    /** set when a moderator merged this case into another; its URL then points there */
+    mergedIntoId: integer().references((): AnyPgColumn => cases.id, { onDelete: 'set null' }),
   },
   (t) => [
     index('cases_board_rank_idx').on(t.boardId, t.status, t.rankScore.desc()),
@@ -193,6 +201,37 @@ export const caseComments = pgTable(
     createdAt: createdAt(),
     editedAt: timestamp({ withTimezone: true, mode: 'date' }),
     deletedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /** hidden by a moderator: shown to moderators and the comment's author only */
+    hiddenAt: timestamp({ withTimezone: true, mode: 'date' }),
+    hiddenReason: text().notNull().default(''),
   },
   (t) => [index('case_comments_case_idx').on(t.caseId, t.createdAt)],
+);
+
+export const flagContentTypeEnum = pgEnum('flag_content_type', ['case', 'comment']);
+export const flagStatusEnum = pgEnum('flag_status', ['open', 'resolved']);
+
+/** A member's report of a case or comment for moderators to look at. */
+export const caseFlags = pgTable(
+  'case_flags',
+  {
+    id: id(),
+    contentType: flagContentTypeEnum().notNull(),
+    /** the case's or the comment's id, after content_type */
+    contentId: integer().notNull(),
+    flaggerId: integer()
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    reason: text().notNull(),
+    status: flagStatusEnum().notNull().default('open'),
+    resolverId: integer().references(() => users.id),
+    resolution: text().notNull().default(''),
+    createdAt: createdAt(),
+    resolvedAt: timestamp({ withTimezone: true, mode: 'date' }),
+  },
+  (t) => [
+    // one open flag per person and item: a second report while the first is open is a conflict
+    uniqueIndex('case_flags_open_key').on(t.contentType, t.contentId, t.flaggerId).where(sql`${t.status} = 'open'`),
+    index('case_flags_status_idx').on(t.status, t.createdAt),
+  ],
 );

@@ -3,6 +3,7 @@
 import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type {
   CaseComment,
+  CaseFlag,
   CaseConfirmation,
   CaseOutcome,
   CaseReading,
@@ -26,6 +27,11 @@ import {
   users,
 } from '../../db/schema';
 import { writeAudit, type AuditRecord } from '../audit/audit.repository';
+import {
+  enqueueModeratorNotification,
+  enqueueNotification,
+  type EnqueueInput,
+} from '../notifications/notifications.repository';
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
 
@@ -48,7 +54,14 @@ export interface CaseRecord {
   outcome: CaseOutcome;
   minutesSpent: number | null;
   publishedAt: Date | null;
+  lockedAt: Date | null;
+  hiddenAt: Date | null;
+  hiddenReason: string;
+  mergedIntoId: number | null;
 }
+
+/** What a moderator changes on a case: lock, hide, or the reverse. */
+export type CaseModerationChange = Partial<Pick<CaseRecord, 'lockedAt' | 'hiddenAt' | 'hiddenReason'>>;
 
 export interface CaseFields {
   status: CaseStatus;
@@ -177,6 +190,8 @@ function filterWhere(filter: CaseFilter, query: SQL | null): SQL {
   }
   if (filter.outcome !== undefined) parts.push(sql`c.outcome = ${filter.outcome}`);
   if (query) parts.push(sql`c.search @@ ${query}`);
+  // hidden and merged-away cases are reached by their id only, never listed
+  parts.push(sql`c.hidden_at IS NULL AND c.merged_into_id IS NULL`);
   return sql.join(parts, sql` AND `);
 }
 
@@ -249,6 +264,8 @@ type CommentRow = {
   created_at: Date | string;
   edited_at: Date | string | null;
   deleted_at: Date | string | null;
+  hidden_at: Date | string | null;
+  hidden_reason: string;
 };
 
 export interface CommentRecord {
@@ -257,6 +274,7 @@ export interface CommentRecord {
   authorId: number;
   body: string;
   deleted: boolean;
+  hidden: boolean;
 }
 
 function toComment(row: CommentRow): Omit<CaseComment, 'html'> {
@@ -269,8 +287,51 @@ function toComment(row: CommentRow): Omit<CaseComment, 'html'> {
     createdAt: iso(row.created_at),
     editedAt: row.edited_at === null ? null : iso(row.edited_at),
     deleted,
+    hidden: row.hidden_at === null ? null : { at: iso(row.hidden_at), reason: row.hidden_reason },
   };
 }
+
+type FlagRow = {
+  id: number;
+  content_type: 'case' | 'comment';
+  content_id: number;
+  case_id: number | null;
+  flagger_id: number;
+  flagger_login: string;
+  flagger_name: string;
+  reason: string;
+  status: 'open' | 'resolved';
+  resolver_id: number | null;
+  resolver_login: string | null;
+  resolver_name: string | null;
+  resolution: string;
+  created_at: Date | string;
+  resolved_at: Date | string | null;
+};
+
+function toFlag(row: FlagRow): CaseFlag {
+  return {
+    id: row.id,
+    contentType: row.content_type,
+    contentId: row.content_id,
+    caseId: row.case_id,
+    flagger: { id: row.flagger_id, login: row.flagger_login, name: row.flagger_name },
+    reason: row.reason,
+    status: row.status,
+    resolver:
+      row.resolver_id === null ? null : { id: row.resolver_id, login: row.resolver_login ?? '', name: row.resolver_name ?? '' },
+    resolution: row.resolution,
+    createdAt: iso(row.created_at),
+    resolvedAt: row.resolved_at === null ? null : iso(row.resolved_at),
+  };
+}
+
+const flagSelect = sql`
+  SELECT f.id, f.content_type, f.content_id,
+         CASE WHEN f.content_type = 'case' THEN f.content_id ELSE (SELECT m.case_id FROM case_comments m WHERE m.id = f.content_id) END AS case_id,
+         f.flagger_id, fu.login AS flagger_login, fu.name AS flagger_name, f.reason, f.status,
+         f.resolver_id, ru.login AS resolver_login, ru.name AS resolver_name, f.resolution, f.created_at, f.resolved_at
+  FROM case_flags f JOIN users fu ON fu.id = f.flagger_id LEFT JOIN users ru ON ru.id = f.resolver_id`;
 
 export function createCasebookRepository(db: Database) {
   async function resolveComponents(boardId: number, refdes: string[]) {
@@ -283,7 +344,7 @@ export function createCasebookRepository(db: Database) {
 
   const commentSelect = sql`
     SELECT m.id, m.case_id, m.author_id, u.login AS author_login, u.name AS author_name, m.body,
-           m.created_at, m.edited_at, m.deleted_at
+           m.created_at, m.edited_at, m.deleted_at, m.hidden_at, m.hidden_reason
     FROM case_comments m JOIN users u ON u.id = m.author_id`;
 
   return {
@@ -382,9 +443,14 @@ export function createCasebookRepository(db: Database) {
         outcome: CaseOutcome;
         minutes_spent: number | null;
         published_at: Date | string | null;
+        locked_at: Date | string | null;
+        hidden_at: Date | string | null;
+        hidden_reason: string;
+        merged_into_id: number | null;
       }>(sql`
         SELECT c.id, c.board_id, b.slug AS board_slug, b.title AS board_title, c.author_id, c.status, c.title,
-               c.symptom, c.root_cause, c.fix_steps, c.body, c.outcome, c.minutes_spent, c.published_at
+               c.symptom, c.root_cause, c.fix_steps, c.body, c.outcome, c.minutes_spent, c.published_at,
+               c.locked_at, c.hidden_at, c.hidden_reason, c.merged_into_id
         FROM cases c JOIN boards b ON b.id = c.board_id WHERE c.id = ${caseId}`);
       const r = result.rows[0];
       if (!r) return null;
@@ -403,6 +469,10 @@ export function createCasebookRepository(db: Database) {
         outcome: r.outcome,
         minutesSpent: r.minutes_spent,
         publishedAt: r.published_at === null ? null : new Date(r.published_at),
+        lockedAt: r.locked_at === null ? null : new Date(r.locked_at),
+        hiddenAt: r.hidden_at === null ? null : new Date(r.hidden_at),
+        hiddenReason: r.hidden_reason,
+        mergedIntoId: r.merged_into_id,
       };
     },
 
@@ -490,7 +560,7 @@ export function createCasebookRepository(db: Database) {
             greatest(COALESCE(ts_rank_cd(c.search, q.query, 32), 0), similarity(c.title, ${text}::text))::float8 AS raw_text_score,
             (q.query IS NOT NULL AND c.search @@ q.query) OR similarity(c.title, ${text}::text) > 0.3 AS text_match
           FROM cases c CROSS JOIN q
-          WHERE c.board_id = ${input.boardId} AND c.status = 'published'
+          WHERE c.board_id = ${input.boardId} AND c.status = 'published' AND c.hidden_at IS NULL AND c.merged_into_id IS NULL
             ${input.excludeId === null ? sql`` : sql`AND c.id <> ${input.excludeId}`}
         )
         SELECT ${summaryColumns(input.viewerId)}, m.shared_nets, m.shared_culprits,
@@ -548,15 +618,20 @@ export function createCasebookRepository(db: Database) {
       );
     },
 
-    /** Adds or updates the user's confirmation; true when it is new. */
-    async setConfirmation(caseId: number, userId: number, note: string, scorer: CaseScorer): Promise<boolean> {
+    /**
+     * Adds or updates the user's confirmation; true when it is new. A new one queues `notify` in the
+     * same transaction, so the author hears of exactly the confirmations that were committed.
+     */
+    async setConfirmation(caseId: number, userId: number, note: string, scorer: CaseScorer, notify: EnqueueInput | null = null): Promise<boolean> {
       return changeEvidence(db, caseId, scorer, async (tx) => {
         // xmax is 0 on a freshly inserted row and set on one ON CONFLICT updated
         const result = await tx.execute<{ inserted: boolean }>(sql`
           INSERT INTO case_confirmations (case_id, user_id, note) VALUES (${caseId}, ${userId}, ${note})
           ON CONFLICT (case_id, user_id) DO UPDATE SET note = EXCLUDED.note
           RETURNING (xmax = 0) AS inserted`);
-        return result.rows[0]?.inserted ?? false;
+        const inserted = result.rows[0]?.inserted ?? false;
+        if (inserted && notify) await enqueueNotification(tx, notify);
+        return inserted;
       });
     },
 
@@ -595,12 +670,23 @@ export function createCasebookRepository(db: Database) {
     async findComment(commentId: number): Promise<CommentRecord | null> {
       const [row] = await db.select().from(caseComments).where(eq(caseComments.id, commentId));
       if (!row) return null;
-      return { id: row.id, caseId: row.caseId, authorId: row.authorId, body: row.body, deleted: row.deletedAt !== null };
+      return {
+        id: row.id,
+        caseId: row.caseId,
+        authorId: row.authorId,
+        body: row.body,
+        deleted: row.deletedAt !== null,
+        hidden: row.hiddenAt !== null,
+      };
     },
 
-    async insertComment(caseId: number, authorId: number, body: string): Promise<number> {
-      const [row] = await db.insert(caseComments).values({ caseId, authorId, body }).returning({ id: caseComments.id });
-      return row!.id;
+    /** `notify` builds the notification from the new comment's id; it commits with the comment. */
+    async insertComment(caseId: number, authorId: number, body: string, notify: ((commentId: number) => EnqueueInput) | null = null): Promise<number> {
+      return db.transaction(async (tx) => {
+        const [row] = await tx.insert(caseComments).values({ caseId, authorId, body }).returning({ id: caseComments.id });
+        if (notify) await enqueueNotification(tx, notify(row!.id));
+        return row!.id;
+      });
     },
 
     /** With `audit`, the change commits together with its audit row (a moderator's change to another's comment). */
@@ -615,6 +701,69 @@ export function createCasebookRepository(db: Database) {
       await db.transaction(async (tx) => {
         await tx.update(caseComments).set({ deletedAt: new Date() }).where(eq(caseComments.id, commentId));
         if (audit) await writeAudit(tx, audit);
+      });
+    },
+
+    /** A moderator's lock, hide or restore, committed together with its audit row. */
+    async moderateCase(caseId: number, change: CaseModerationChange, audit: AuditRecord) {
+      await db.transaction(async (tx) => {
+        await tx.update(cases).set(change).where(eq(cases.id, caseId));
+        await writeAudit(tx, audit);
+      });
+    },
+
+    /** Hides (with the reason) or restores (null) a comment, with its audit row. */
+    async moderateComment(commentId: number, hidden: { at: Date; reason: string } | null, audit: AuditRecord) {
+      await db.transaction(async (tx) => {
+        await tx
+          .update(caseComments)
+          .set(hidden ? { hiddenAt: hidden.at, hiddenReason: hidden.reason } : { hiddenAt: null, hiddenReason: '' })
+          .where(eq(caseComments.id, commentId));
+        await writeAudit(tx, audit);
+      });
+    },
+
+    /**
+     * Records a member's flag and tells the moderators, in one transaction. Null when the member already
+     * has an open flag on the item (the partial unique index decides, so two quick clicks make one flag).
+     */
+    async insertFlag(
+      flag: { contentType: 'case' | 'comment'; contentId: number; flaggerId: number; reason: string },
+      notify: { kind: string; payload: unknown },
+    ): Promise<number | null> {
+      return db.transaction(async (tx) => {
+        const result = await tx.execute<{ id: number }>(sql`
+          INSERT INTO case_flags (content_type, content_id, flagger_id, reason)
+          VALUES (${flag.contentType}, ${flag.contentId}, ${flag.flaggerId}, ${flag.reason})
+          ON CONFLICT (content_type, content_id, flagger_id) WHERE status = 'open' DO NOTHING
+          RETURNING id`);
+        const id = result.rows[0]?.id;
+        if (id === undefined) return null;
+        await enqueueModeratorNotification(tx, { ...notify, exceptUserId: flag.flaggerId });
+        return id;
+      });
+    },
+
+    async flagById(flagId: number): Promise<CaseFlag | null> {
+      const result = await db.execute<FlagRow>(sql`${flagSelect} WHERE f.id = ${flagId}`);
+      const row = result.rows[0];
+      return row ? toFlag(row) : null;
+    },
+
+    async listFlags(status: 'open' | 'resolved'): Promise<CaseFlag[]> {
+      const result = await db.execute<FlagRow>(sql`${flagSelect} WHERE f.status = ${status} ORDER BY f.created_at, f.id LIMIT 500`);
+      return result.rows.map(toFlag);
+    },
+
+    /** Resolves an open flag with its audit row; false when it was not open (any more). */
+    async resolveFlag(flagId: number, resolverId: number, resolution: string, audit: AuditRecord): Promise<boolean> {
+      return db.transaction(async (tx) => {
+        const result = await tx.execute<{ id: number }>(sql`
+          UPDATE case_flags SET status = 'resolved', resolver_id = ${resolverId}, resolution = ${resolution}, resolved_at = now()
+          WHERE id = ${flagId} AND status = 'open' RETURNING id`);
+        if (result.rows.length === 0) return false;
+        await writeAudit(tx, audit);
+        return true;
       });
     },
   };

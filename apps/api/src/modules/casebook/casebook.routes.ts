@@ -12,11 +12,15 @@ import {
   commentDeleteQuerySchema,
   commentInputSchema,
   commentUpdateSchema,
+  flagListQuerySchema,
+  moderationInputSchema,
   similarCasesQuerySchema,
 } from '@railyard/shared';
 import { requireJsonBody } from '../../middleware/csrf-guard';
 import { requireRole } from '../../middleware/require-role';
-import type { CasebookService, Viewer } from './casebook.service';
+import type { CaseModerationAction, CasebookService, Viewer } from './casebook.service';
+
+const caseModerationActions: CaseModerationAction[] = ['lock', 'unlock', 'hide', 'restore'];
 
 const netName = z.string().min(1).max(200);
 const refdes = z.string().min(1).max(64);
@@ -28,6 +32,7 @@ export function casebookRouter(service: CasebookService, writeLimit: RequestHand
   const router = Router();
   // the role guard comes first on every write, so 401 and 403 are decided before the body is read
   const member = requireRole('member');
+  const moderator = requireRole('moderator');
 
   router.get('/boards/:slug/cases/similar', async (req, res) => {
     const slug = boardSlugSchema.parse(req.params.slug);
@@ -120,6 +125,44 @@ export function casebookRouter(service: CasebookService, writeLimit: RequestHand
     const { reason } = commentDeleteQuerySchema.parse(req.query);
     await service.deleteComment(id, reason, req.user!);
     res.status(204).end();
+  });
+
+  for (const action of caseModerationActions) {
+    router.post(`/cases/:id/${action}`, moderator, writeLimit, requireJsonBody, async (req, res) => {
+      const id = idParam(req);
+      const { reason } = moderationInputSchema.parse(req.body);
+      res.json({ case: await service.moderateCase(id, action, reason, req.user!) });
+    });
+  }
+
+  for (const action of ['hide', 'restore'] as const) {
+    router.post(`/comments/:id/${action}`, moderator, writeLimit, requireJsonBody, async (req, res) => {
+      const id = idParam(req);
+      const { reason } = moderationInputSchema.parse(req.body);
+      res.json({ comment: await service.moderateComment(id, action, reason, req.user!) });
+    });
+  }
+
+  router.post('/cases/:id/flag', member, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    const { reason } = moderationInputSchema.parse(req.body);
+    res.status(201).json({ flag: await service.flag('case', id, reason, req.user!) });
+  });
+
+  router.post('/comments/:id/flag', member, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    const { reason } = moderationInputSchema.parse(req.body);
+    res.status(201).json({ flag: await service.flag('comment', id, reason, req.user!) });
+  });
+
+  router.get('/moderation/flags', moderator, async (req, res) => {
+    res.json(await service.flags(flagListQuerySchema.parse(req.query).status));
+  });
+
+  router.post('/moderation/flags/:id/resolve', moderator, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    const { reason } = moderationInputSchema.parse(req.body);
+    res.json({ flag: await service.resolveFlag(id, reason, req.user!) });
   });
 
   return router;

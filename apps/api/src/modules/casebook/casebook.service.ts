@@ -7,6 +7,7 @@ import {
   type CaseConfirmation,
   type CaseCreate,
   type CaseDetail,
+  type CaseFlag,
   type CaseListQuery,
   type CaseListResponse,
   type CasePageQuery,
@@ -22,8 +23,17 @@ import {
 import { caseEvidence, caseRankScore, reputation } from '@railyard/vote-ranking';
 import { AppError } from '../../lib/app-error';
 import type { BoardsRepository } from '../boards/boards.repository';
-import type { CaseFields, CaseLinks, CaseRecord, CaseScorer, CasebookRepository } from './casebook.repository';
+import type {
+  CaseFields,
+  CaseLinks,
+  CaseModerationChange,
+  CaseRecord,
+  CaseScorer,
+  CasebookRepository,
+} from './casebook.repository';
 import { nameCandidates, renderCaseMarkdown, type BoardNames } from './case-markdown';
+
+export type CaseModerationAction = 'lock' | 'unlock' | 'hide' | 'restore';
 
 /** Who is asking: null when signed out. */
 export type Viewer = Pick<SessionUser, 'id' | 'role'> | null;
@@ -58,6 +68,9 @@ function invalid(issues: { field: string; message: string }[]): AppError {
   return new AppError(400, 'invalid_request', 'The request is not valid', { issues });
 }
 
+/** The name a notification shows for the person who acted (names are limited to 100 characters there). */
+const displayName = (user: Pick<SessionUser, 'login' | 'name'>) => (user.name || user.login).slice(0, 100);
+
 const forbidden = (message: string) => new AppError(403, 'forbidden', message);
 const caseNotFound = (id: number) => AppError.notFound(`Case ${id}`);
 
@@ -70,11 +83,24 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     return board;
   }
 
-  /** A case the viewer may see: drafts only to their author; anything else is "not found". */
+  const isModerator = (viewer: Viewer) => viewer !== null && roleAtLeast(viewer.role, 'moderator');
+
+  /**
+   * A case the viewer may see: drafts only to their author, hidden cases to their author and moderators;
+   * anything else is "not found", so a hidden case's existence is not given away.
+   */
   async function visibleCase(id: number, viewer: Viewer): Promise<CaseRecord> {
     const record = await cases.findCase(id);
     if (!record || (record.status === 'draft' && record.authorId !== viewer?.id)) throw caseNotFound(id);
+    if (record.hiddenAt !== null && record.authorId !== viewer?.id && !isModerator(viewer)) throw caseNotFound(id);
     return record;
+  }
+
+  /** A locked case keeps what it has; nothing new is added to it or changed in it. */
+  function refuseLocked(record: CaseRecord, what: string) {
+    if (record.lockedAt !== null) {
+      throw new AppError(409, 'case_locked', `Case ${record.id} is locked by a moderator: it takes no ${what}`);
+    }
   }
 
   /** A published case someone other than its author acts on: votes and confirmations. */
@@ -86,6 +112,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     if (record.status !== 'published') {
       throw new AppError(409, 'not_published', what === 'vote' ? 'Only published cases take votes' : 'Only published cases can be confirmed');
     }
+    refuseLocked(record, what === 'vote' ? 'new votes' : 'new confirmations');
     return record;
   }
 
@@ -218,6 +245,11 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
       },
       readings,
       components,
+      moderation: {
+        lockedAt: record.lockedAt?.toISOString() ?? null,
+        hiddenAt: record.hiddenAt?.toISOString() ?? null,
+        hiddenReason: record.hiddenReason,
+      },
     };
   }
 
@@ -238,8 +270,16 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     if (!comment || comment.deleted) throw AppError.notFound(`Comment ${commentId}`);
     const record = await visibleCase(comment.caseId, viewer);
     const own = comment.authorId === viewer.id;
-    if (!own && !roleAtLeast(viewer.role, 'moderator')) throw forbidden(`You can only ${action} your own comments`);
+    if (!own && !isModerator(viewer)) throw forbidden(`You can only ${action} your own comments`);
+    if (!isModerator(viewer)) refuseLocked(record, 'edits');
     return { comment, record, own };
+  }
+
+  /** A comment a moderator acts on, with its case; hidden and locked ones included. */
+  async function moderatedComment(commentId: number, moderator: SessionUser) {
+    const comment = await cases.findComment(commentId);
+    if (!comment || comment.deleted) throw AppError.notFound(`Comment ${commentId}`);
+    return { comment, record: await visibleCase(comment.caseId, moderator) };
   }
 
   function paging(query: CasePageQuery) {
@@ -273,6 +313,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     async update(id: number, change: CaseUpdate, editor: SessionUser): Promise<CaseDetail> {
       const record = await visibleCase(id, editor);
       if (record.authorId !== editor.id) throw forbidden('Only the author can edit a case');
+      refuseLocked(record, 'edits');
       if (record.status === 'published' && change.status === 'draft') {
         throw new AppError(409, 'already_published', 'A published case cannot go back to draft', { field: 'status' });
       }
@@ -404,8 +445,12 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     },
 
     async confirm(id: number, note: string, user: SessionUser): Promise<{ created: boolean; score: CaseScore }> {
-      await othersPublishedCase(id, user, 'confirmation');
-      const created = await cases.setConfirmation(id, user.id, note, scorer);
+      const record = await othersPublishedCase(id, user, 'confirmation');
+      const created = await cases.setConfirmation(id, user.id, note, scorer, {
+        userId: record.authorId,
+        kind: 'case_confirmed',
+        payload: { caseId: id, caseTitle: record.title, confirmedByName: displayName(user), ...(note ? { note } : {}) },
+      });
       return { created, score: await scoreOf(id, user) };
     },
 
@@ -422,13 +467,25 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
 
     async comments(id: number, viewer: Viewer): Promise<{ caseId: number; comments: CaseComment[] }> {
       const record = await visibleCase(id, viewer);
-      return { caseId: id, comments: await renderComments(record, await cases.commentsOf(id)) };
+      // a hidden comment reaches moderators and its own author only
+      const shown = (await cases.commentsOf(id)).filter((c) => !c.hidden || isModerator(viewer) || c.author.id === viewer?.id);
+      return { caseId: id, comments: await renderComments(record, shown) };
     },
 
     async addComment(id: number, body: string, user: SessionUser): Promise<CaseComment> {
       const record = await visibleCase(id, user);
       if (record.status !== 'published') throw new AppError(409, 'not_published', 'Only published cases take comments');
-      const commentId = await cases.insertComment(id, user.id, body);
+      refuseLocked(record, 'new comments');
+      // nobody is told about their own comment
+      const notify =
+        record.authorId === user.id
+          ? null
+          : (newId: number) => ({
+              userId: record.authorId,
+              kind: 'case_commented',
+              payload: { caseId: id, caseTitle: record.title, commentId: newId, commenterName: displayName(user), excerpt: body.slice(0, 500) },
+            });
+      const commentId = await cases.insertComment(id, user.id, body, notify);
       const [comment] = await renderComments(record, [(await cases.commentById(commentId))!]);
       return comment!;
     },
@@ -468,6 +525,107 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
               details: { case: record.id, author: comment.authorId, body: comment.body },
             },
       );
+    },
+
+    /** lock, unlock, hide, restore: a moderator's change of a case's state, each with its audit row. */
+    async moderateCase(id: number, action: CaseModerationAction, reason: string, moderator: SessionUser): Promise<CaseDetail> {
+      const record = await visibleCase(id, moderator);
+      const refuse = (code: string, message: string) => new AppError(409, code, message);
+      let change: CaseModerationChange;
+      switch (action) {
+        case 'lock':
+          if (record.lockedAt !== null) throw refuse('already_locked', `Case ${id} is already locked`);
+          change = { lockedAt: new Date() };
+          break;
+        case 'unlock':
+          if (record.lockedAt === null) throw refuse('not_locked', `Case ${id} is not locked`);
+          change = { lockedAt: null };
+          break;
+        case 'hide':
+          if (record.hiddenAt !== null) throw refuse('already_hidden', `Case ${id} is already hidden`);
+          change = { hiddenAt: new Date(), hiddenReason: reason };
+          break;
+        case 'restore':
+          if (record.hiddenAt === null) throw refuse('not_hidden', `Case ${id} is not hidden`);
+          change = { hiddenAt: null, hiddenReason: '' };
+          break;
+      }
+      await cases.moderateCase(id, change, {
+        actorId: moderator.id,
+        action: `case.${action}`,
+        targetType: 'case',
+        targetId: String(id),
+        reason,
+        details: { author: record.authorId, board: record.boardSlug },
+      });
+      return detail((await cases.findCase(id))!, moderator);
+    },
+
+    async moderateComment(commentId: number, action: 'hide' | 'restore', reason: string, moderator: SessionUser): Promise<CaseComment> {
+      const { comment, record } = await moderatedComment(commentId, moderator);
+      if (action === 'hide' && comment.hidden) throw new AppError(409, 'already_hidden', `Comment ${commentId} is already hidden`);
+      if (action === 'restore' && !comment.hidden) throw new AppError(409, 'not_hidden', `Comment ${commentId} is not hidden`);
+      await cases.moderateComment(commentId, action === 'hide' ? { at: new Date(), reason } : null, {
+        actorId: moderator.id,
+        action: `comment.${action}`,
+        targetType: 'comment',
+        targetId: String(commentId),
+        reason,
+        details: { case: record.id, author: comment.authorId },
+      });
+      const [updated] = await renderComments(record, [(await cases.commentById(commentId))!]);
+      return updated!;
+    },
+
+    /** A member reports a case or a comment; every moderator is mailed (content_flagged). */
+    async flag(target: 'case' | 'comment', contentId: number, reason: string, flagger: SessionUser): Promise<CaseFlag> {
+      let record: CaseRecord;
+      if (target === 'case') {
+        record = await visibleCase(contentId, flagger);
+      } else {
+        const comment = await cases.findComment(contentId);
+        if (!comment || comment.deleted) throw AppError.notFound(`Comment ${contentId}`);
+        record = await visibleCase(comment.caseId, flagger);
+        if (comment.hidden && comment.authorId !== flagger.id && !isModerator(flagger)) throw AppError.notFound(`Comment ${contentId}`);
+      }
+      const flagId = await cases.insertFlag(
+        { contentType: target, contentId, flaggerId: flagger.id, reason },
+        {
+          kind: 'content_flagged',
+          payload: {
+            caseId: record.id,
+            caseTitle: record.title,
+            target,
+            ...(target === 'comment' ? { commentId: contentId } : {}),
+            flaggedByName: displayName(flagger),
+            reason,
+          },
+        },
+      );
+      if (flagId === null) {
+        throw new AppError(409, 'already_flagged', `You already flagged this ${target}; a moderator will look at it`);
+      }
+      return (await cases.flagById(flagId))!;
+    },
+
+    async flags(status: 'open' | 'resolved'): Promise<{ status: 'open' | 'resolved'; flags: CaseFlag[] }> {
+      return { status, flags: await cases.listFlags(status) };
+    },
+
+    async resolveFlag(flagId: number, reason: string, moderator: SessionUser): Promise<CaseFlag> {
+      const flag = await cases.flagById(flagId);
+      if (!flag) throw AppError.notFound(`Flag ${flagId}`);
+      if (flag.status !== 'open') throw new AppError(409, 'already_resolved', `Flag ${flagId} is already resolved`);
+      const resolved = await cases.resolveFlag(flagId, moderator.id, reason, {
+        actorId: moderator.id,
+        action: 'flag.resolve',
+        targetType: 'flag',
+        targetId: String(flagId),
+        reason,
+        details: { contentType: flag.contentType, contentId: flag.contentId, flagger: flag.flagger.id },
+      });
+      if (!resolved) throw new AppError(409, 'already_resolved', `Flag ${flagId} is already resolved`);
+      return (await cases.flagById(flagId))!;
     },
   };
 }
