@@ -189,7 +189,7 @@ export function railSearchBench(): BenchSection {
     title: 'Rail search, per keystroke',
     met,
     body: [
-      `The board page's rail search (\`apps/web/src/features/rails/rail-index.ts\`: a pigeonhole filter, then Myers' bit-vector edit distance) over`,
+      `The board page's rail search (\`apps/web/src/features/rails/rail-index.ts\`: exact folded substring hits when they fill the list, else fuse.js's Bitap search) over`,
       `${nets.length.toLocaleString('en')} generated net names with ${aliasCount.toLocaleString('en')} aliases (\`tests/bench/rail-search-bench.ts\`), run in Node (V8, as in Chromium).`,
       `Each keystroke is one search for the text typed so far, top ${shownMatches} as the box shows; each name typed ${rounds} times after a warm-up.`,
       `Times are wall clock, as a person waits; the CPU columns (this process's user + system time) leave out the time`,
