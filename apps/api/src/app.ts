@@ -135,10 +135,17 @@ export function createApp({ env, pool, logger }: AppDeps) {
         };
   const { passport, strategyFor } = createPassport({ env, users: services.users, logger, endpointsFor });
 
-  app.use(createSessionMiddleware(env, pool));
-  app.use(absoluteSessionExpiry(env));
-  app.use(passport.session());
-  app.use(refuseBanned);
+  const withSession = express.Router();
+  withSession.use(createSessionMiddleware(env, pool), absoluteSessionExpiry(env), passport.session(), refuseBanned);
+  const cookieName = sessionCookieName(env);
+  // A read without a session cookie has nobody to find: it skips the session store and passport.
+  // Sign-in (/auth) always gets a session, since it starts one.
+  app.use((req, res, next) => {
+    const read = req.method === 'GET' || req.method === 'HEAD';
+    const hasSessionCookie = (req.headers.cookie ?? '').split(';').some((c) => c.trim().startsWith(`${cookieName}=`));
+    if (read && !hasSessionCookie && !req.path.startsWith('/auth/')) return next();
+    withSession(req, res, next);
+  });
 
   const minute = 60_000;
   const limits = {
