@@ -15,7 +15,7 @@ import { memo, useCallback, useRef, type KeyboardEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
 import { NetKindBadge, netKindOrder } from '../../../components/ui/net-kind-badge';
-import { ariaSort, SortMark } from '../../../components/ui/sort-mark';
+import { ariaSort, SortableHeaderLabel } from '../../../components/ui/sort-mark';
 import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
@@ -171,18 +171,7 @@ export function NetsTable({
                       aria-sort={ariaSort(header)}
                       className={`h-8 px-2 text-xs font-medium text-ink-muted ${numeric ? 'text-right' : 'text-left'}`}
                     >
-                      {header.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className={`inline-flex w-full items-center gap-1.5 rounded px-1 py-0.5 hover:text-ink ${numeric ? 'flex-row-reverse' : ''} ${header.column.getIsSorted() ? 'text-ink' : ''}`}
-                        >
-                          <span>{label}</span>
-                          <SortMark direction={header.column.getIsSorted()} />
-                        </button>
-                      ) : (
-                        <span className="px-1">{label}</span>
-                      )}
+                      <SortableHeaderLabel header={header} label={label} numeric={numeric} />
                     </th>
                   );
                 })}

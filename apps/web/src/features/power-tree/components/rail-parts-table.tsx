@@ -12,7 +12,7 @@ import {
 import { Fragment, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
-import { ariaSort, SortMark } from '../../../components/ui/sort-mark';
+import { ariaSort, SortableHeaderLabel } from '../../../components/ui/sort-mark';
 import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatFarads } from '../../../lib/quantity-format';
@@ -262,18 +262,7 @@ export function RailPartsTable({
                       aria-sort={ariaSort(header)}
                       className="h-8 px-2 text-left text-xs font-medium text-ink-muted"
                     >
-                      {header.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className={`inline-flex w-full items-center gap-1.5 rounded px-1 py-0.5 hover:text-ink ${header.column.getIsSorted() ? 'text-ink' : ''}`}
-                        >
-                          <span>{label}</span>
-                          <SortMark direction={header.column.getIsSorted()} />
-                        </button>
-                      ) : (
-                        <span className="px-1">{label}</span>
-                      )}
+                      <SortableHeaderLabel header={header} label={label} />
                     </th>
                   );
                 })}
