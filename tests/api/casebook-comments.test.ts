@@ -22,7 +22,7 @@ describe('comments on a case', () => {
     const res = await commenter.post(`/api/cases/${written.id}/comments`).send({ body: 'Check **C2** too, it sits on VSYS.' });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.comment).toMatchObject({ caseId: written.id, author: { id: commenter.user.id }, deleted: false, editedAt: null });
-    expect(res.body.comment.html).toContain(`<a href="/boards/${slug}?component=C2" class="part-link" rel="nofollow noopener noreferrer">C2</a>`);
+    expect(res.body.comment.html).toContain(`<a href="/boards/${slug}/components/C2" class="part-link" rel="nofollow noopener noreferrer">C2</a>`);
     expect(res.body.comment.html).toContain(`href="/boards/${slug}/nets/VSYS"`);
     expect((await thread(written.id)).map((c) => c.body)).toEqual(['Check **C2** too, it sits on VSYS.']);
     expect((await anonymous().get(`/api/cases/${written.id}`)).body.case.commentCount).toBe(1);

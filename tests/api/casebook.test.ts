@@ -52,7 +52,7 @@ describe('writing up a case', () => {
     });
     const { html } = (await anonymous().get(`/api/cases/${written.id}`)).body.case as CaseDetail;
     expect(html.body).toContain(`<a href="/boards/${slug}/nets/VSYS" class="net-link" rel="nofollow noopener noreferrer">VSYS</a>`);
-    expect(html.body).toContain(`<a href="/boards/${slug}?component=C2" class="part-link" rel="nofollow noopener noreferrer">C2</a>`);
+    expect(html.body).toContain(`<a href="/boards/${slug}/components/C2" class="part-link" rel="nofollow noopener noreferrer">C2</a>`);
     // code stays code, and a refdes the board does not have stays text
     expect(html.body).toContain('<code>C1</code>');
     expect(html.body).toContain('U9 is not');

@@ -132,24 +132,52 @@ describe('GET /api/boards/:slug/nets/:net', () => {
 });
 
 describe('power graph cache', () => {
+  /** Imports (or with `replace` re-imports) a board where the battery feeds one converter's `rail`. */
+  const oneConverterBoard = (small: string) => (rail: string, replace: boolean) => {
+    const csv = ['refdes,pin,net', 'J1,1,GND', 'J1,2,VBAT', 'U1,1,VBAT', 'U1,2,' + rail, 'U1,3,GND'].join('\n');
+    const links = JSON.stringify({
+      format: 'railyard-annotations',
+      version: 1,
+      rootNet: 'VBAT',
+      powerLinks: [{ from: 'VBAT', to: rail, via: 'U1', kind: 'converter' }],
+    });
+    return admin
+      .post(`/api/boards/${small}/imports?wait=true`)
+      .field('format', 'csv')
+      .field('replace', String(replace))
+      .attach('netlist', Buffer.from(csv), 'pins.csv')
+      .attach('annotations', Buffer.from(links), 'a.json');
+  };
+
   it('is dropped when the board is re-imported, so traces show the new netlist', async () => {
     const small = uniqueSlug('cache');
-    const csv = (rail: string) => ['refdes,pin,net', 'J1,1,GND', 'J1,2,VBAT', 'U1,1,VBAT', 'U1,2,' + rail, 'U1,3,GND'].join('\n');
-    const links = (rail: string) =>
-      JSON.stringify({ format: 'railyard-annotations', version: 1, rootNet: 'VBAT', powerLinks: [{ from: 'VBAT', to: rail, via: 'U1', kind: 'converter' }] });
-    const load = (rail: string, replace: boolean) =>
-      admin
-        .post(`/api/boards/${small}/imports?wait=true`)
-        .field('format', 'csv')
-        .field('replace', String(replace))
-        .attach('netlist', Buffer.from(csv(rail)), 'pins.csv')
-        .attach('annotations', Buffer.from(links(rail)), 'a.json');
+    const load = oneConverterBoard(small);
     expect((await load('VCC_1V8', false)).status).toBe(201);
     expect((await tree(`/api/boards/${small}/tree`)).nodes.map((n) => n.net)).toEqual(['VBAT', 'VCC_1V8']);
     expect((await load('VCC_1V2', true)).status).toBe(201);
     await expect
       .poll(async () => (await tree(`/api/boards/${small}/tree`)).nodes.map((n) => n.net))
       .toEqual(['VBAT', 'VCC_1V2']);
+  });
+
+  // RFC 9110 §8.8.3 (ETag) and §13.1.2 (If-None-Match): a client holding the current tag gets 304 without
+  // a body; a changed representation gets a new tag.
+  it('tags each trace, answers 304 to the current tag and a new tag after the board changes', async () => {
+    const small = uniqueSlug('etag');
+    const load = oneConverterBoard(small);
+    expect((await load('VCC_1V8', false)).status).toBe(201);
+    const url = `/api/boards/${small}/tree`;
+    const first = await request(app).get(url);
+    const tag = first.headers.etag as string;
+    expect(tag).toMatch(/^W\/"[0-9a-f]+-[A-Za-z0-9+/]{27}"$/);
+    const again = await request(app).get(url).set('If-None-Match', tag);
+    expect(again.status).toBe(304);
+    expect(again.text).toBe('');
+    expect((await load('VCC_1V2', true)).status).toBe(201);
+    await expect.poll(async () => (await request(app).get(url).set('If-None-Match', tag)).status).toBe(200);
+    const changed = await request(app).get(url);
+    expect(changed.headers.etag).not.toBe(tag);
+    expect((changed.body as PowerTree).nodes.map((n) => n.net)).toEqual(['VBAT', 'VCC_1V2']);
   });
 });
 

@@ -3,6 +3,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import type { Env } from '../../apps/api/src/config/env';
 import { createTestApp } from './test-app';
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -22,12 +23,12 @@ export function launchBrowser(): Promise<Browser> {
 }
 
 /** The real app with the built client, listening on an ephemeral loopback port. */
-export async function startWebServer() {
+export async function startWebServer(overrides: Partial<Env> = {}) {
   const staticDir = process.env.RAILYARD_WEB_DIST ?? path.join(repoRoot, 'dist/web');
   if (!existsSync(path.join(staticDir, 'index.html'))) {
     throw new Error(`The built client is missing at ${staticDir}: run \`npx vite build\` (npm test does it)`);
   }
-  const test = await createTestApp({ STATIC_DIR: staticDir });
+  const test = await createTestApp({ ...overrides, STATIC_DIR: staticDir });
   return { ...test, stop: () => test.close() };
 }
 

@@ -30,7 +30,7 @@ import { createAttachmentsRepository } from './modules/attachments/attachments.r
 import { createAttachmentsService } from './modules/attachments/attachments.service';
 import { createLocalDiskStorage } from './modules/attachments/attachment-storage';
 import { createCasebookRepository } from './modules/casebook/casebook.repository';
-import { casebookRouter } from './modules/casebook/casebook.routes';
+import { casebookRouter, mergedCasePagesRouter } from './modules/casebook/casebook.routes';
 import { createCasebookService } from './modules/casebook/casebook.service';
 import { createImportsRepository } from './modules/imports/imports.repository';
 import { importsRouter } from './modules/imports/imports.routes';
@@ -103,8 +103,17 @@ export function createApp({ env, pool, logger }: AppDeps) {
   if (env.TRUST_PROXY) app.set('trust proxy', /^\d+$/.test(env.TRUST_PROXY) ? Number(env.TRUST_PROXY) : env.TRUST_PROXY);
 
   app.use(securityHeaders({ staticDir: env.STATIC_DIR, production, imageHosts: production ? ['https://avatars.githubusercontent.com'] : [] }));
-  // one log line per request only when asked for (LOG_LEVEL=debug or trace)
-  app.use(pinoHttp({ logger, autoLogging: env.LOG_LEVEL === 'debug' || env.LOG_LEVEL === 'trace' }));
+  // One log line per request only when asked for (LOG_LEVEL=debug or trace). Otherwise handlers log through
+  // the app's logger itself: pino-http's per-request child logger and serialisers cost more than a
+  // small cached response.
+  if (env.LOG_LEVEL === 'debug' || env.LOG_LEVEL === 'trace') {
+    app.use(pinoHttp({ logger }));
+  } else {
+    app.use((req, _res, next) => {
+      req.log = logger;
+      next();
+    });
+  }
 
   // Sign-in: real GitHub, or outside production without credentials the local fake at /fake-github.
   const fake = usesFakeGitHub(env)
@@ -185,13 +194,14 @@ export function createApp({ env, pool, logger }: AppDeps) {
   );
   api.use(notificationsRouter(services.notifications, limits.writes));
   if (delivery.catcher) api.use(mailboxRouter(delivery.catcher));
-  api.use(adminRouter({ users: services.users, audit: services.audit, writeLimit: limits.writes }));
+  api.use(adminRouter({ users: services.users, audit: services.audit, casebook: services.casebook, writeLimit: limits.writes }));
   api.use(notFoundHandler);
   app.use('/api', api);
 
   if (env.STATIC_DIR && existsSync(env.STATIC_DIR)) {
     const root = path.resolve(env.STATIC_DIR);
     app.use(express.static(root, { index: false, maxAge: '1h' }));
+    app.use(mergedCasePagesRouter(services.casebook));
     // client-side routes: every other GET gets the app shell
     app.get(/^(?!\/api\/).*/, (_req, res) => {
       res.sendFile(path.join(root, 'index.html'));

@@ -52,8 +52,16 @@ export const auditEntrySchema = z.object({
   reason: z.string(),
   details: z.record(z.string(), z.unknown()),
   createdAt: z.string(),
+  /**
+   * Set on actions an admin can take back (a case merge): whether it still can be, and the audit row
+   * of the undo once done.
+   */
+  undo: z.object({ possible: z.boolean(), undoneByEntryId: z.number().int().nullable() }).nullable().optional(),
 });
 export type AuditEntry = z.infer<typeof auditEntrySchema>;
+
+export const auditUndoInputSchema = z.strictObject({ reason });
+export type AuditUndoInput = z.infer<typeof auditUndoInputSchema>;
 
 export const auditQuerySchema = z.strictObject({
   limit: z.coerce.number().int().min(1).max(500).default(100),

@@ -127,3 +127,46 @@ export type ComponentListResponse = z.infer<typeof componentListResponseSchema>;
 export const componentsQuerySchema = z.strictObject({
   net: z.string().min(1).max(200).optional(),
 });
+
+/**
+ * A refdes as it comes in a URL. The importers take up to 200 characters of any kind, so only what
+ * no netlist holds is refused: nothing, more than that, surrounding spaces, control characters.
+ */
+export const refdesParamSchema = z
+  .string()
+  .min(1, 'give the reference designator')
+  .max(200, 'a reference designator has at most 200 characters')
+  .refine((refdes) => refdes.trim() === refdes, 'a reference designator has no surrounding spaces')
+  .refine(
+    (refdes) => !/[\u0000-\u001f\u007f]/.test(refdes),
+    'a reference designator has no control characters',
+  );
+
+export const componentParamsSchema = z.object({ slug: boardSlugSchema, refdes: refdesParamSchema });
+
+/** One pin of a part with what the technician needs of its net before probing it. */
+export const componentPinSchema = z.object({
+  pin: z.string(),
+  /** null when the pin is not connected */
+  net: z.string().nullable(),
+  netKind: netKindSchema.nullable(),
+  /** true when the pin's net is ground: readings on the other pins are taken against it */
+  ground: z.boolean(),
+  nominalVoltage: z.number().nullable(),
+  x: z.number().nullable(),
+  y: z.number().nullable(),
+});
+export type ComponentPin = z.infer<typeof componentPinSchema>;
+
+/** `GET /api/boards/:slug/components/:refdes`: a part, its pins in natural order, its casebook record. */
+export const componentDetailSchema = z.object({
+  board: boardSlugSchema,
+  component: componentRowSchema.omit({ pins: true }).extend({ pins: z.array(componentPinSchema) }),
+  casebook: z.object({
+    /** published cases, neither hidden nor merged away, that name the part */
+    cases: z.number().int(),
+    /** solved published cases that name it as the culprit */
+    solvedAsCulprit: z.number().int(),
+  }),
+});
+export type ComponentDetail = z.infer<typeof componentDetailSchema>;

@@ -243,6 +243,8 @@ export type CaseModerationState = z.infer<typeof caseModerationStateSchema>;
 export const caseDetailSchema = caseSummarySchema.extend({
   /** always sent by the API (optional only for older clients' fixtures) */
   moderation: caseModerationStateSchema.optional(),
+  /** the cases merged into this one (newest first), so readers of an old link know where they are */
+  mergedFrom: z.array(z.object({ id: z.number().int(), title: z.string() })).optional(),
   rootCause: z.string(),
   fixSteps: z.string(),
   body: z.string(),
@@ -276,7 +278,8 @@ export const similarCaseSchema = caseSummarySchema.extend({
 });
 export type SimilarCase = z.infer<typeof similarCaseSchema>;
 
-export const caseRevisionSnapshotSchema = z.object({
+/** Every field and link of a case at one revision. */
+const caseSnapshotFieldsSchema = z.object({
   status: caseStatusSchema,
   title: z.string(),
   symptom: z.string(),
@@ -288,6 +291,11 @@ export const caseRevisionSnapshotSchema = z.object({
   readings: z.array(caseReadingInputSchema),
   nets: z.array(z.string()),
   components: z.array(z.object({ refdes: z.string(), culprit: z.boolean() })),
+});
+
+export const caseRevisionSnapshotSchema = caseSnapshotFieldsSchema.extend({
+  /** on the revision a merge wrote: the duplicate's own text and links as they were when merged */
+  merged: z.object({ caseId: z.number().int(), snapshot: caseSnapshotFieldsSchema }).optional(),
 });
 export type CaseRevisionSnapshot = z.infer<typeof caseRevisionSnapshotSchema>;
 
@@ -322,6 +330,39 @@ const requiredReason = z.string().trim().min(3, 'say why, in a few words').max(5
 
 export const moderationInputSchema = z.strictObject({ reason: requiredReason });
 export type ModerationInput = z.infer<typeof moderationInputSchema>;
+
+/** A moderator folds a duplicate case (the one in the URL) into `intoCaseId`, a case on the same board. */
+export const caseMergeInputSchema = z.strictObject({
+  intoCaseId: z.number().int().positive().max(2_147_483_647),
+  reason: requiredReason,
+});
+export type CaseMergeInput = z.infer<typeof caseMergeInputSchema>;
+
+/** Rows of each kind a merge moved from the duplicate to the kept case, or left on the duplicate. */
+export const caseMergeCountsSchema = z.object({
+  nets: z.number().int(),
+  components: z.number().int(),
+  readings: z.number().int(),
+  attachments: z.number().int(),
+  comments: z.number().int(),
+  confirmations: z.number().int(),
+  votes: z.number().int(),
+});
+export type CaseMergeCounts = z.infer<typeof caseMergeCountsSchema>;
+
+export const caseMergeSummarySchema = z.object({
+  /** the audit row that records the merge; an admin undoes the merge through it */
+  auditId: z.number().int(),
+  fromCaseId: z.number().int(),
+  intoCaseId: z.number().int(),
+  moved: caseMergeCountsSchema,
+  /**
+   * rows that stay on the duplicate because the kept case already has their like: a second vote or
+   * confirmation by the same person, a net or part the kept case already links. Nothing is deleted.
+   */
+  keptOnDuplicate: caseMergeCountsSchema,
+});
+export type CaseMergeSummary = z.infer<typeof caseMergeSummarySchema>;
 
 export const flagContentTypes = ['case', 'comment'] as const;
 export const flagStatuses = ['open', 'resolved'] as const;

@@ -39,6 +39,10 @@ export function createAppRouter(queryClient: QueryClient) {
         { path: paths.board.path, ...lazyPage(queryClient, () => import('./routes/board')) },
         { path: paths.net.path, ...lazyPage(queryClient, () => import('./routes/net')) },
         {
+          path: paths.component.path,
+          ...lazyPage(queryClient, () => import('./routes/component')),
+        },
+        {
           path: paths.boardCases.path,
           ...lazyPage(queryClient, () => import('./routes/board-cases')),
         },
@@ -59,6 +63,15 @@ export function createAppRouter(queryClient: QueryClient) {
         },
         { path: paths.search.path, ...lazyPage(queryClient, () => import('./routes/search')) },
         { path: paths.admin.path, ...lazyPage(queryClient, () => import('./routes/admin')) },
+        {
+          path: paths.moderation.path,
+          ...lazyPage(queryClient, () => import('./routes/moderation')),
+        },
+        {
+          path: paths.notificationSettings.path,
+          ...lazyPage(queryClient, () => import('./routes/notification-settings')),
+        },
+        { path: paths.mailbox.path, ...lazyPage(queryClient, () => import('./routes/mailbox')) },
         { path: '*', ...lazyPage(queryClient, () => import('./routes/not-found')) },
       ],
     },

@@ -16,6 +16,12 @@ export const paths = {
     getHref: (slug: string, net: string) =>
       `/boards/${encodeURIComponent(slug)}/nets/${encodeURIComponent(net)}`,
   },
+  /** A part's own page; `refdes` in any letter case (the page redirects to the board's spelling). */
+  component: {
+    path: '/boards/:slug/components/:refdes',
+    getHref: (slug: string, refdes: string) =>
+      `/boards/${encodeURIComponent(slug)}/components/${encodeURIComponent(refdes)}`,
+  },
   newBoardImport: { path: '/import', getHref: () => '/import' },
   /** A board's casebook; `filters` become the query string the list page reads back. */
   boardCases: {
@@ -39,6 +45,12 @@ export const paths = {
   editCase: { path: '/cases/:id/edit', getHref: (id: number) => `/cases/${id}/edit` },
   caseHistory: { path: '/cases/:id/history', getHref: (id: number) => `/cases/${id}/history` },
   admin: { path: '/admin', getHref: () => '/admin' },
+  /** open flags for moderators to look at */
+  moderation: { path: '/moderation', getHref: () => '/moderation' },
+  /** the mail the development server caught (only where the local mail catcher runs) */
+  mailbox: { path: '/mailbox', getHref: () => '/mailbox' },
+  /** e-mail links point here; keep it in step with the API's notification templates */
+  notificationSettings: { path: '/settings/notifications', getHref: () => '/settings/notifications' },
   /**
    * The server's sign-in, not a client route: a full-page navigation (a plain link) that comes
    * back to `returnTo`, a path on this site.

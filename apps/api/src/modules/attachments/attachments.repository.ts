@@ -1,4 +1,5 @@
-// Rows of case_attachments, and the little of a case the attachment rules need (its author and status).
+// Rows of case_attachments, and the little of a case the attachment rules need (its author, status and
+// whether it was merged away).
 import { asc, eq } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { caseAttachments } from '../../db/schema/attachments';
@@ -11,15 +12,21 @@ export interface CaseAccess {
   id: number;
   authorId: number;
   status: (typeof cases.$inferSelect)['status'];
+  /** set once a moderator merged the case into another, which then takes its new attachments */
+  mergedIntoId: number | null;
 }
+
+const caseAccess = {
+  id: cases.id,
+  authorId: cases.authorId,
+  status: cases.status,
+  mergedIntoId: cases.mergedIntoId,
+};
 
 export function createAttachmentsRepository(db: Database) {
   return {
     async findCase(caseId: number): Promise<CaseAccess | null> {
-      const rows = await db
-        .select({ id: cases.id, authorId: cases.authorId, status: cases.status })
-        .from(cases)
-        .where(eq(cases.id, caseId));
+      const rows = await db.select(caseAccess).from(cases).where(eq(cases.id, caseId));
       return rows[0] ?? null;
     },
 
@@ -42,7 +49,7 @@ export function createAttachmentsRepository(db: Database) {
       const rows = await db
         .select({
           attachment: caseAttachments,
-          case: { id: cases.id, authorId: cases.authorId, status: cases.status },
+          case: caseAccess,
         })
         .from(caseAttachments)
         .innerJoin(cases, eq(cases.id, caseAttachments.caseId))

@@ -120,6 +120,14 @@ export function createAttachmentsService(deps: {
     /** Refuses early (before the upload is read) when the person may not attach to the case. */
     async assertCanAttach(caseId: number, actor: Actor): Promise<void> {
       const found = await visibleCase(caseId, actor);
+      if (found.mergedIntoId !== null) {
+        throw new AppError(
+          409,
+          'case_merged',
+          `Case ${caseId} was merged into case ${found.mergedIntoId}: attach files there`,
+          { mergedIntoId: found.mergedIntoId },
+        );
+      }
       if (found.authorId !== actor.id && !isModerator(actor)) {
         throw new AppError(
           403,

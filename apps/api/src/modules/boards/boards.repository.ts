@@ -1,8 +1,9 @@
 // Reads of boards and their netlists. The only boards code that talks to the database.
 import { eq, sql } from 'drizzle-orm';
-import type { BoardSummary, ComponentRow, NetKind, NetRow } from '@railyard/shared';
+import type { BoardSummary, ComponentPin, ComponentRow, NetKind, NetRow } from '@railyard/shared';
 import type { Database } from '../../db/client';
 import { boards } from '../../db/schema';
+import { countCases, countSolvedAsCulprit } from '../casebook/casebook.repository';
 
 const summaryColumns = sql`
   b.id, b.slug, b.title, b.device_family, b.board_number, b.revision, b.battery_voltage, b.notes,
@@ -180,6 +181,70 @@ export function createBoardsRepository(db: Database) {
         rotation: r.rotation,
         pins: r.pins,
       }));
+    },
+
+    /**
+     * One part by refdes in any letter case, as case write-ups name parts; the exact spelling wins
+     * when a board has two that differ only in case. Pins come in text order: the caller sorts them.
+     */
+    async findComponent(boardId: number, refdes: string) {
+      const result = await db.execute<{
+        id: number;
+        refdes: string;
+        kind: ComponentRow['kind'];
+        value: string;
+        magnitude: number | null;
+        unit: string | null;
+        tolerance: number | null;
+        rated_voltage: number | null;
+        package: string;
+        side: ComponentRow['side'];
+        x: number | null;
+        y: number | null;
+        rotation: number | null;
+        pins: ComponentPin[];
+      }>(sql`
+        SELECT c.id, c.refdes, c.kind, c.value, c.magnitude, c.unit, c.tolerance, c.rated_voltage,
+               c.package, c.side, c.x, c.y, c.rotation,
+               COALESCE((
+                 SELECT json_agg(json_build_object(
+                          'pin', p.pin, 'net', n.name, 'netKind', n.kind, 'ground', COALESCE(n.kind = 'ground', false),
+                          'nominalVoltage', n.nominal_voltage, 'x', p.x, 'y', p.y)
+                        ORDER BY p.pin)
+                 FROM pins p LEFT JOIN nets n ON n.id = p.net_id
+                 WHERE p.component_id = c.id
+               ), '[]') AS pins
+        FROM components c
+        WHERE c.board_id = ${boardId} AND upper(c.refdes) = upper(${refdes})
+        ORDER BY (c.refdes = ${refdes}) DESC, c.refdes
+        LIMIT 1`);
+      const r = result.rows[0];
+      if (!r) return null;
+      return {
+        id: r.id,
+        refdes: r.refdes,
+        kind: r.kind,
+        value: r.value,
+        magnitude: r.magnitude,
+        unit: r.unit,
+        tolerance: r.tolerance,
+        ratedVoltage: r.rated_voltage,
+        package: r.package,
+        side: r.side,
+        x: r.x,
+        y: r.y,
+        rotation: r.rotation,
+        pins: r.pins,
+      };
+    },
+
+    /** The part's record in the casebook, counted by the same queries as the casebook's own lists. */
+    async casebookTally(boardId: number, componentId: number) {
+      const [cases, solvedAsCulprit] = await Promise.all([
+        countCases(db, { boardId, status: 'published', componentId }),
+        countSolvedAsCulprit(db, componentId),
+      ]);
+      return { cases, solvedAsCulprit };
     },
   };
 }

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { boardSlugSchema, componentsQuerySchema } from '@railyard/shared';
+import { boardSlugSchema, componentParamsSchema, componentsQuerySchema } from '@railyard/shared';
 import type { BoardsService } from './boards.service';
 
 export function boardsRouter(service: BoardsService): Router {
@@ -21,6 +21,11 @@ export function boardsRouter(service: BoardsService): Router {
     const slug = boardSlugSchema.parse(req.params.slug);
     const query = componentsQuerySchema.parse(req.query);
     res.json(await service.listComponents(slug, query.net));
+  });
+
+  router.get('/boards/:slug/components/:refdes', async (req, res) => {
+    const { slug, refdes } = componentParamsSchema.parse(req.params);
+    res.json(await service.getComponent(slug, refdes));
   });
 
   return router;

@@ -1,6 +1,7 @@
-import type { BoardDetail } from '@railyard/shared';
+import type { BoardDetail, ComponentDetail } from '@railyard/shared';
 import { AppError } from '../../lib/app-error';
 import type { BoardsRepository } from './boards.repository';
+import { comparePins } from './pin-order';
 
 export function createBoardsService(repo: BoardsRepository) {
   async function requireBoard(slug: string) {
@@ -39,6 +40,18 @@ export function createBoardsService(repo: BoardsRepository) {
         net = found.name;
       }
       return { board: board.slug, net, components: await repo.listComponents(board.id, netId) };
+    },
+
+    async getComponent(slug: string, refdes: string): Promise<ComponentDetail> {
+      const board = await requireBoard(slug);
+      const found = await repo.findComponent(board.id, refdes);
+      if (!found) throw AppError.notFound(`Component "${refdes}" on board "${slug}"`);
+      const { id, pins, ...component } = found;
+      return {
+        board: board.slug,
+        component: { ...component, pins: [...pins].sort((a, b) => comparePins(a.pin, b.pin)) },
+        casebook: await repo.casebookTally(board.id, id),
+      };
     },
   };
 }

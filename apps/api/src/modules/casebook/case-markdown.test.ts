@@ -120,12 +120,12 @@ describe('the second layer, sanitize-html, on HTML a parser bug might let throug
 });
 
 describe('links to the board’s nets and parts', () => {
-  it('links names written in the text to the net page and the part on the board', () => {
+  it('links names written in the text to the net’s page and the part’s page', () => {
     const html = renderCaseMarkdown('VSYS shorted; replaced C1012 next to U2001.', board);
     expect(html).toBe(
       '<p><a href="/boards/demo-board/nets/VSYS" class="net-link" rel="nofollow noopener noreferrer">VSYS</a> shorted; replaced ' +
-        '<a href="/boards/demo-board?component=C1012" class="part-link" rel="nofollow noopener noreferrer">C1012</a> next to ' +
-        '<a href="/boards/demo-board?component=U2001" class="part-link" rel="nofollow noopener noreferrer">U2001</a>.</p>\n',
+        '<a href="/boards/demo-board/components/C1012" class="part-link" rel="nofollow noopener noreferrer">C1012</a> next to ' +
+        '<a href="/boards/demo-board/components/U2001" class="part-link" rel="nofollow noopener noreferrer">U2001</a>.</p>\n',
     );
   });
 

@@ -104,7 +104,7 @@ export function netHref(slug: string, net: string): string {
 }
 
 export function componentHref(slug: string, refdes: string): string {
-  return `/boards/${encodeURIComponent(slug)}?component=${encodeURIComponent(refdes)}`;
+  return `/boards/${encodeURIComponent(slug)}/components/${encodeURIComponent(refdes)}`;
 }
 
 function linkBoardNames(state: StateCore): void {

@@ -3,6 +3,7 @@
 import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type {
   CaseComment,
+  CaseMergeCounts,
   CaseFlag,
   CaseConfirmation,
   CaseOutcome,
@@ -16,6 +17,7 @@ import type {
 } from '@railyard/shared';
 import type { Database } from '../../db/client';
 import {
+  auditLog,
   caseComments,
   caseComponents,
   caseConfirmations,
@@ -32,8 +34,11 @@ import {
   enqueueNotification,
   type EnqueueInput,
 } from '../notifications/notifications.repository';
+import type { CaseMergeMoves } from './case-merge-record';
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
+/** The database or an open transaction, for reads a transaction must make on its own snapshot. */
+type Reader = Pick<Database, 'execute' | 'select'>;
 
 /** one array parameter (drizzle would spread a plain array into a list of parameters) */
 const arrayParam = (values: readonly (string | number)[]) => sql.param([...values]);
@@ -195,6 +200,25 @@ function filterWhere(filter: CaseFilter, query: SQL | null): SQL {
   return sql.join(parts, sql` AND `);
 }
 
+/** How many cases a list with this filter holds, counted as listCases counts its total. */
+export async function countCases(runner: Reader, filter: CaseFilter): Promise<number> {
+  const query = filter.q === undefined ? null : sql`websearch_to_tsquery('simple', ${filter.q}::text)`;
+  const result = await runner.execute<{ total: number }>(sql`SELECT count(*)::int AS total FROM cases c WHERE ${filterWhere(filter, query)}`);
+  return result.rows[0]?.total ?? 0;
+}
+
+/**
+ * How many solved, published cases of the board name this part as the culprit. A merged-away case
+ * is left out: the part it still names is one its kept case names too.
+ */
+export async function countSolvedAsCulprit(runner: Reader, componentId: number): Promise<number> {
+  const result = await runner.execute<{ count: number }>(sql`
+    SELECT count(*)::int AS count FROM case_components cc JOIN cases c ON c.id = cc.case_id
+    WHERE cc.component_id = ${componentId} AND cc.culprit AND c.status = 'published' AND c.outcome = 'solved'
+      AND c.hidden_at IS NULL AND c.merged_into_id IS NULL`);
+  return result.rows[0]?.count ?? 0;
+}
+
 const orderings: Record<CaseSort, SQL> = {
   // ties: the newer write-up first, then the higher id, so pages never overlap
   rank: sql`c.rank_score DESC, c.published_at DESC NULLS LAST, c.id DESC`,
@@ -333,6 +357,248 @@ const flagSelect = sql`
          f.resolver_id, ru.login AS resolver_login, ru.name AS resolver_name, f.resolution, f.created_at, f.resolved_at
   FROM case_flags f JOIN users fu ON fu.id = f.flagger_id LEFT JOIN users ru ON ru.id = f.resolver_id`;
 
+async function selectCase(runner: Reader, caseId: number): Promise<CaseRecord | null> {
+  const result = await runner.execute<{
+    id: number;
+    board_id: number;
+    board_slug: string;
+    board_title: string;
+    author_id: number;
+    status: CaseStatus;
+    title: string;
+    symptom: string;
+    root_cause: string;
+    fix_steps: string;
+    body: string;
+    outcome: CaseOutcome;
+    minutes_spent: number | null;
+    published_at: Date | string | null;
+    locked_at: Date | string | null;
+    hidden_at: Date | string | null;
+    hidden_reason: string;
+    merged_into_id: number | null;
+  }>(sql`
+    SELECT c.id, c.board_id, b.slug AS board_slug, b.title AS board_title, c.author_id, c.status, c.title,
+           c.symptom, c.root_cause, c.fix_steps, c.body, c.outcome, c.minutes_spent, c.published_at,
+           c.locked_at, c.hidden_at, c.hidden_reason, c.merged_into_id
+    FROM cases c JOIN boards b ON b.id = c.board_id WHERE c.id = ${caseId}`);
+  const r = result.rows[0];
+  if (!r) return null;
+  return {
+    id: r.id,
+    boardId: r.board_id,
+    boardSlug: r.board_slug,
+    boardTitle: r.board_title,
+    authorId: r.author_id,
+    status: r.status,
+    title: r.title,
+    symptom: r.symptom,
+    rootCause: r.root_cause,
+    fixSteps: r.fix_steps,
+    body: r.body,
+    outcome: r.outcome,
+    minutesSpent: r.minutes_spent,
+    publishedAt: r.published_at === null ? null : new Date(r.published_at),
+    lockedAt: r.locked_at === null ? null : new Date(r.locked_at),
+    hiddenAt: r.hidden_at === null ? null : new Date(r.hidden_at),
+    hiddenReason: r.hidden_reason,
+    mergedIntoId: r.merged_into_id,
+  };
+}
+
+async function selectReadings(runner: Reader, caseId: number): Promise<CaseReading[]> {
+  const rows = await runner.select().from(caseReadings).where(eq(caseReadings.caseId, caseId)).orderBy(asc(caseReadings.position));
+  return rows.map((r) => ({ position: r.position, net: r.netName, mode: r.mode, measured: r.measured, knownGood: r.knownGood }));
+}
+
+async function selectComponents(runner: Reader, caseId: number): Promise<{ refdes: string; culprit: boolean }[]> {
+  const result = await runner.execute<{ refdes: string; culprit: boolean }>(sql`
+    SELECT k.refdes, cc.culprit FROM case_components cc JOIN components k ON k.id = cc.component_id
+    WHERE cc.case_id = ${caseId} ORDER BY cc.culprit DESC, k.refdes`);
+  return result.rows;
+}
+
+async function selectNetLinks(runner: Reader, caseId: number): Promise<{ id: number; name: string }[]> {
+  const result = await runner.execute<{ id: number; name: string }>(sql`
+    SELECT n.id, n.name FROM case_nets cn JOIN nets n ON n.id = cn.net_id WHERE cn.case_id = ${caseId} ORDER BY n.name`);
+  return result.rows;
+}
+
+/** Rows of each kind still on a case, for what a merge left on the duplicate. */
+async function linkedRowCounts(runner: Reader, caseId: number): Promise<CaseMergeCounts> {
+  const result = await runner.execute<CaseMergeCounts>(sql`
+    SELECT (SELECT count(*) FROM case_nets WHERE case_id = ${caseId})::int AS nets,
+           (SELECT count(*) FROM case_components WHERE case_id = ${caseId})::int AS components,
+           (SELECT count(*) FROM case_readings WHERE case_id = ${caseId})::int AS readings,
+           (SELECT count(*) FROM case_attachments WHERE case_id = ${caseId})::int AS attachments,
+           (SELECT count(*) FROM case_comments WHERE case_id = ${caseId})::int AS comments,
+           (SELECT count(*) FROM case_confirmations WHERE case_id = ${caseId})::int AS confirmations,
+           (SELECT count(*) FROM case_votes WHERE case_id = ${caseId})::int AS votes`);
+  return result.rows[0]!;
+}
+
+const sortedIds = (rows: { id: number }[]) => rows.map((r) => r.id).sort((a, b) => a - b);
+
+/**
+ * What a merge and its undo do to two cases, inside one transaction that holds both case rows locked.
+ * Rows change case by UPDATE, so they keep their ids, authors and dates, and an undo can move back
+ * exactly the rows the merge recorded.
+ */
+function mergeStore(tx: Tx) {
+  return {
+    findCase: (caseId: number) => selectCase(tx, caseId),
+
+    async linksOf(caseId: number) {
+      const [readings, nets, components] = [await selectReadings(tx, caseId), await selectNetLinks(tx, caseId), await selectComponents(tx, caseId)];
+      return { readings, nets, components };
+    },
+
+    linkedRowCounts: (caseId: number) => linkedRowCounts(tx, caseId),
+
+    /**
+     * Moves the duplicate's rows to the kept case: links the kept case lacks, every reading (appended
+     * after the kept case's last one), attachment and comment, and the votes and confirmations of people
+     * with none on the kept case who did not write it. A part the duplicate names as culprit becomes the
+     * kept case's culprit too.
+     */
+    async moveToKept(fromId: number, intoId: number, intoAuthorId: number): Promise<{ moved: CaseMergeMoves; culpritMarked: number[] }> {
+      const marked = await tx.execute<{ id: number }>(sql`
+        UPDATE case_components k SET culprit = true
+        FROM case_components d
+        WHERE d.case_id = ${fromId} AND d.culprit AND k.case_id = ${intoId} AND k.component_id = d.component_id AND NOT k.culprit
+        RETURNING k.id`);
+      const nets = await tx.execute<{ id: number }>(sql`
+        UPDATE case_nets SET case_id = ${intoId}
+        WHERE case_id = ${fromId} AND net_id NOT IN (SELECT net_id FROM case_nets WHERE case_id = ${intoId})
+        RETURNING id`);
+      const components = await tx.execute<{ id: number }>(sql`
+        UPDATE case_components SET case_id = ${intoId}
+        WHERE case_id = ${fromId} AND component_id NOT IN (SELECT component_id FROM case_components WHERE case_id = ${intoId})
+        RETURNING id`);
+      const readings = await tx.execute<{ id: number; position: number }>(sql`
+        WITH start AS (SELECT COALESCE(max(position) + 1, 0) AS at FROM case_readings WHERE case_id = ${intoId}),
+             moving AS (SELECT id, position, (row_number() OVER (ORDER BY position, id) - 1)::int AS k
+                        FROM case_readings WHERE case_id = ${fromId})
+        UPDATE case_readings r SET case_id = ${intoId}, position = start.at + moving.k
+        FROM moving, start WHERE r.id = moving.id
+        RETURNING r.id, moving.position`);
+      const attachments = await tx.execute<{ id: number }>(sql`
+        UPDATE case_attachments SET case_id = ${intoId} WHERE case_id = ${fromId} RETURNING id`);
+      const comments = await tx.execute<{ id: number }>(sql`
+        UPDATE case_comments SET case_id = ${intoId} WHERE case_id = ${fromId} RETURNING id`);
+      // one vote and one confirmation per person and case: the kept case's own stays, the other stays behind
+      const confirmations = await tx.execute<{ id: number }>(sql`
+        UPDATE case_confirmations SET case_id = ${intoId}
+        WHERE case_id = ${fromId} AND user_id <> ${intoAuthorId}
+          AND user_id NOT IN (SELECT user_id FROM case_confirmations WHERE case_id = ${intoId})
+        RETURNING id`);
+      const votes = await tx.execute<{ id: number }>(sql`
+        UPDATE case_votes SET case_id = ${intoId}
+        WHERE case_id = ${fromId} AND user_id <> ${intoAuthorId}
+          AND user_id NOT IN (SELECT user_id FROM case_votes WHERE case_id = ${intoId})
+        RETURNING id`);
+      return {
+        moved: {
+          nets: sortedIds(nets.rows),
+          components: sortedIds(components.rows),
+          readings: readings.rows.map((r) => ({ id: r.id, position: r.position })).sort((a, b) => a.position - b.position),
+          attachments: sortedIds(attachments.rows),
+          comments: sortedIds(comments.rows),
+          confirmations: sortedIds(confirmations.rows),
+          votes: sortedIds(votes.rows),
+        },
+        culpritMarked: sortedIds(marked.rows),
+      };
+    },
+
+    /**
+     * Moves the recorded rows that are still on the kept case back to the duplicate, readings to their
+     * old positions, and clears the culprit marks the merge set. A row the kept case's author deleted or
+     * replaced since is not there to move; one whose like the duplicate holds again is left where it is.
+     */
+    async moveBack(fromId: number, intoId: number, moves: CaseMergeMoves, culpritMarked: number[]): Promise<{ back: CaseMergeMoves; culpritCleared: number[] }> {
+      const ids = (values: number[]) => sql`${arrayParam(values)}::int[]`;
+      const nets = await tx.execute<{ id: number }>(sql`
+        UPDATE case_nets m SET case_id = ${fromId}
+        WHERE m.id = ANY(${ids(moves.nets)}) AND m.case_id = ${intoId}
+          AND NOT EXISTS (SELECT 1 FROM case_nets o WHERE o.case_id = ${fromId} AND o.net_id = m.net_id)
+        RETURNING m.id`);
+      const components = await tx.execute<{ id: number }>(sql`
+        UPDATE case_components m SET case_id = ${fromId}
+        WHERE m.id = ANY(${ids(moves.components)}) AND m.case_id = ${intoId}
+          AND NOT EXISTS (SELECT 1 FROM case_components o WHERE o.case_id = ${fromId} AND o.component_id = m.component_id)
+        RETURNING m.id`);
+      const readings = await tx.execute<{ id: number; position: number }>(sql`
+        UPDATE case_readings r SET case_id = ${fromId}, position = v.position
+        FROM unnest(${ids(moves.readings.map((r) => r.id))}, ${ids(moves.readings.map((r) => r.position))}) AS v(id, position)
+        WHERE r.id = v.id AND r.case_id = ${intoId}
+          AND NOT EXISTS (SELECT 1 FROM case_readings o WHERE o.case_id = ${fromId} AND o.position = v.position)
+        RETURNING r.id, r.position`);
+      const attachments = await tx.execute<{ id: number }>(sql`
+        UPDATE case_attachments SET case_id = ${fromId} WHERE id = ANY(${ids(moves.attachments)}) AND case_id = ${intoId} RETURNING id`);
+      const comments = await tx.execute<{ id: number }>(sql`
+        UPDATE case_comments SET case_id = ${fromId} WHERE id = ANY(${ids(moves.comments)}) AND case_id = ${intoId} RETURNING id`);
+      const confirmations = await tx.execute<{ id: number }>(sql`
+        UPDATE case_confirmations m SET case_id = ${fromId}
+        WHERE m.id = ANY(${ids(moves.confirmations)}) AND m.case_id = ${intoId}
+          AND NOT EXISTS (SELECT 1 FROM case_confirmations o WHERE o.case_id = ${fromId} AND o.user_id = m.user_id)
+        RETURNING m.id`);
+      const votes = await tx.execute<{ id: number }>(sql`
+        UPDATE case_votes m SET case_id = ${fromId}
+        WHERE m.id = ANY(${ids(moves.votes)}) AND m.case_id = ${intoId}
+          AND NOT EXISTS (SELECT 1 FROM case_votes o WHERE o.case_id = ${fromId} AND o.user_id = m.user_id)
+        RETURNING m.id`);
+      const cleared = await tx.execute<{ id: number }>(sql`
+        UPDATE case_components SET culprit = false
+        WHERE id = ANY(${ids(culpritMarked)}) AND case_id = ${intoId} AND culprit
+        RETURNING id`);
+      return {
+        back: {
+          nets: sortedIds(nets.rows),
+          components: sortedIds(components.rows),
+          readings: readings.rows.map((r) => ({ id: r.id, position: r.position })).sort((a, b) => a.position - b.position),
+          attachments: sortedIds(attachments.rows),
+          comments: sortedIds(comments.rows),
+          confirmations: sortedIds(confirmations.rows),
+          votes: sortedIds(votes.rows),
+        },
+        culpritCleared: sortedIds(cleared.rows),
+      };
+    },
+
+    async setMergedInto(caseId: number, intoId: number | null) {
+      await tx.update(cases).set({ mergedIntoId: intoId, updatedAt: new Date() }).where(eq(cases.id, caseId));
+    },
+
+    /** Counts, rank and search text of a case after rows came or went. */
+    async refresh(caseId: number, searchText: string, scorer: CaseScorer) {
+      await rescore(tx, caseId, scorer);
+      await tx.update(cases).set({ searchText, updatedAt: new Date() }).where(eq(cases.id, caseId));
+    },
+
+    async insertRevision(caseId: number, revision: RevisionRecord): Promise<number> {
+      const [row] = await tx.insert(caseRevisions).values({ caseId, ...revision }).returning({ id: caseRevisions.id });
+      return row!.id;
+    },
+
+    writeAudit: (record: AuditRecord) => writeAudit(tx, record),
+
+    notify: (input: EnqueueInput) => enqueueNotification(tx, input),
+
+    /** The audit row of the undo of a merge, once there is one. */
+    async undoOf(mergeEntryId: number, fromId: number): Promise<number | null> {
+      const result = await tx.execute<{ id: number }>(sql`
+        SELECT id FROM audit_log
+        WHERE target_type = 'case' AND target_id = ${String(fromId)} AND action = 'case.unmerge'
+          AND details->>'undoes' = ${String(mergeEntryId)}
+        ORDER BY id LIMIT 1`);
+      return result.rows[0]?.id ?? null;
+    },
+  };
+}
+
+export type CaseMergeStore = ReturnType<typeof mergeStore>;
+
 export function createCasebookRepository(db: Database) {
   async function resolveComponents(boardId: number, refdes: string[]) {
     if (refdes.length === 0) return [];
@@ -427,53 +693,53 @@ export function createCasebookRepository(db: Database) {
       await db.delete(cases).where(eq(cases.id, caseId));
     },
 
-    async findCase(caseId: number): Promise<CaseRecord | null> {
-      const result = await db.execute<{
-        id: number;
-        board_id: number;
-        board_slug: string;
-        board_title: string;
-        author_id: number;
-        status: CaseStatus;
-        title: string;
-        symptom: string;
-        root_cause: string;
-        fix_steps: string;
-        body: string;
-        outcome: CaseOutcome;
-        minutes_spent: number | null;
-        published_at: Date | string | null;
-        locked_at: Date | string | null;
-        hidden_at: Date | string | null;
-        hidden_reason: string;
-        merged_into_id: number | null;
-      }>(sql`
-        SELECT c.id, c.board_id, b.slug AS board_slug, b.title AS board_title, c.author_id, c.status, c.title,
-               c.symptom, c.root_cause, c.fix_steps, c.body, c.outcome, c.minutes_spent, c.published_at,
-               c.locked_at, c.hidden_at, c.hidden_reason, c.merged_into_id
-        FROM cases c JOIN boards b ON b.id = c.board_id WHERE c.id = ${caseId}`);
-      const r = result.rows[0];
-      if (!r) return null;
-      return {
-        id: r.id,
-        boardId: r.board_id,
-        boardSlug: r.board_slug,
-        boardTitle: r.board_title,
-        authorId: r.author_id,
-        status: r.status,
-        title: r.title,
-        symptom: r.symptom,
-        rootCause: r.root_cause,
-        fixSteps: r.fix_steps,
-        body: r.body,
-        outcome: r.outcome,
-        minutesSpent: r.minutes_spent,
-        publishedAt: r.published_at === null ? null : new Date(r.published_at),
-        lockedAt: r.locked_at === null ? null : new Date(r.locked_at),
-        hiddenAt: r.hidden_at === null ? null : new Date(r.hidden_at),
-        hiddenReason: r.hidden_reason,
-        mergedIntoId: r.merged_into_id,
-      };
+    findCase: (caseId: number) => selectCase(db, caseId),
+
+    /**
+     * Where a case was merged into, for anyone to be sent there: null when it was not merged or is
+     * hidden (whose readers the API sorts out, so a hidden case's existence is not given away),
+     * undefined when there is no such case.
+     */
+    async mergedIntoOf(caseId: number): Promise<number | null | undefined> {
+      const [row] = await db
+        .select({ mergedIntoId: cases.mergedIntoId, hiddenAt: cases.hiddenAt })
+        .from(cases)
+        .where(eq(cases.id, caseId));
+      if (!row) return undefined;
+      return row.hiddenAt === null ? row.mergedIntoId : null;
+    },
+
+    /** Cases merged into this one, the latest merge first; hidden ones only when asked for. */
+    async mergedFrom(caseId: number, includeHidden: boolean): Promise<{ id: number; title: string }[]> {
+      const result = await db.execute<{ id: number; title: string }>(sql`
+        SELECT c.id, c.title FROM cases c
+        WHERE c.merged_into_id = ${caseId} ${includeHidden ? sql`` : sql`AND c.hidden_at IS NULL`}
+        ORDER BY (SELECT max(a.id) FROM audit_log a
+                  WHERE a.target_type = 'case' AND a.target_id = c.id::text AND a.action = 'case.merge') DESC NULLS LAST,
+                 c.id DESC`);
+      return result.rows;
+    },
+
+    /**
+     * Runs `work` in one transaction holding the cases' rows locked (FOR UPDATE), taken in id order so
+     * that two moderators merging the same pair both ways wait for each other instead of deadlocking.
+     */
+    async withCasesLocked<T>(caseIds: number[], work: (store: CaseMergeStore) => Promise<T>): Promise<T> {
+      return db.transaction(async (tx) => {
+        for (const caseId of [...new Set(caseIds)].sort((a, b) => a - b)) {
+          await tx.execute(sql`SELECT 1 FROM cases WHERE id = ${caseId} FOR UPDATE`);
+        }
+        return work(mergeStore(tx));
+      });
+    },
+
+    /** An audit row as a merge's undo reads it. */
+    async auditEntry(entryId: number): Promise<{ action: string; targetType: string; targetId: string; details: Record<string, unknown> } | null> {
+      const [row] = await db
+        .select({ action: auditLog.action, targetType: auditLog.targetType, targetId: auditLog.targetId, details: auditLog.details })
+        .from(auditLog)
+        .where(eq(auditLog.id, entryId));
+      return row ?? null;
     },
 
     async summaryOf(caseId: number, viewerId: number | null): Promise<CaseSummary | null> {
@@ -482,23 +748,9 @@ export function createCasebookRepository(db: Database) {
       return row ? toSummary(row) : null;
     },
 
-    async readingsOf(caseId: number): Promise<CaseReading[]> {
-      const rows = await db.select().from(caseReadings).where(eq(caseReadings.caseId, caseId)).orderBy(asc(caseReadings.position));
-      return rows.map((r) => ({ position: r.position, net: r.netName, mode: r.mode, measured: r.measured, knownGood: r.knownGood }));
-    },
-
-    async componentsOf(caseId: number): Promise<{ refdes: string; culprit: boolean }[]> {
-      const result = await db.execute<{ refdes: string; culprit: boolean }>(sql`
-        SELECT k.refdes, cc.culprit FROM case_components cc JOIN components k ON k.id = cc.component_id
-        WHERE cc.case_id = ${caseId} ORDER BY cc.culprit DESC, k.refdes`);
-      return result.rows;
-    },
-
-    async netLinksOf(caseId: number): Promise<{ id: number; name: string }[]> {
-      const result = await db.execute<{ id: number; name: string }>(sql`
-        SELECT n.id, n.name FROM case_nets cn JOIN nets n ON n.id = cn.net_id WHERE cn.case_id = ${caseId} ORDER BY n.name`);
-      return result.rows;
-    },
+    readingsOf: (caseId: number) => selectReadings(db, caseId),
+    componentsOf: (caseId: number) => selectComponents(db, caseId),
+    netLinksOf: (caseId: number) => selectNetLinks(db, caseId),
 
     async listCases(filter: CaseFilter, sort: CaseSort, page: { limit: number; offset: number }, viewerId: number | null) {
       const query = filter.q === undefined ? null : sql`websearch_to_tsquery('simple', ${filter.q}::text)`;
@@ -517,13 +769,7 @@ export function createCasebookRepository(db: Database) {
       };
     },
 
-    /** How many solved, published cases of the board name this part as the culprit. */
-    async solvedAsCulprit(componentId: number): Promise<number> {
-      const result = await db.execute<{ count: number }>(sql`
-        SELECT count(*)::int AS count FROM case_components cc JOIN cases c ON c.id = cc.case_id
-        WHERE cc.component_id = ${componentId} AND cc.culprit AND c.status = 'published' AND c.outcome = 'solved'`);
-      return result.rows[0]?.count ?? 0;
-    },
+    solvedAsCulprit: (componentId: number) => countSolvedAsCulprit(db, componentId),
 
     /**
      * Published cases of a board sharing nets or culprit parts with a draft, or whose text is like it:

@@ -6,6 +6,7 @@ import {
   caseCreateSchema,
   idParamSchema,
   caseListQuerySchema,
+  caseMergeInputSchema,
   casePageQuerySchema,
   caseUpdateSchema,
   caseVoteInputSchema,
@@ -62,7 +63,13 @@ export function casebookRouter(service: CasebookService, writeLimit: RequestHand
   });
 
   router.get('/cases/:id', async (req, res) => {
-    res.json({ case: await service.get(idParam(req), viewer(req)) });
+    const found = await service.get(idParam(req), viewer(req));
+    if ('mergedInto' in found) {
+      // not cached: an admin may undo the merge, and a browser keeps a cached 301 for good
+      res.status(301).set('Cache-Control', 'no-store').location(`/api/cases/${found.mergedInto.id}`).json(found);
+      return;
+    }
+    res.json(found);
   });
 
   router.patch('/cases/:id', member, writeLimit, requireJsonBody, async (req, res) => {
@@ -135,6 +142,11 @@ export function casebookRouter(service: CasebookService, writeLimit: RequestHand
     });
   }
 
+  router.post('/cases/:id/merge', moderator, writeLimit, requireJsonBody, async (req, res) => {
+    const id = idParam(req);
+    res.json(await service.merge(id, caseMergeInputSchema.parse(req.body), req.user!));
+  });
+
   for (const action of ['hide', 'restore'] as const) {
     router.post(`/comments/:id/${action}`, moderator, writeLimit, requireJsonBody, async (req, res) => {
       const id = idParam(req);
@@ -165,5 +177,26 @@ export function casebookRouter(service: CasebookService, writeLimit: RequestHand
     res.json({ flag: await service.resolveFlag(id, reason, req.user!) });
   });
 
+  return router;
+}
+
+/**
+ * The web pages of a merged-away case (`/cases/:id`, `/cases/:id/history`) answer a real redirect to
+ * the case it ended up in, so old links and bookmarks land there; anything else goes on to the app shell.
+ */
+export function mergedCasePagesRouter(service: CasebookService): Router {
+  const router = Router();
+  for (const suffix of ['', '/history']) {
+    router.get(`/cases/:id${suffix}`, async (req, res, next) => {
+      const id = idParamSchema.safeParse(req.params.id);
+      const destination = id.success ? await service.mergeDestination(id.data) : null;
+      if (destination === null) return next();
+      // the kept case's page tells the reader where the old link went
+      const query = new URL(req.originalUrl, 'http://localhost').searchParams;
+      if (!query.has('mergedFrom')) query.set('mergedFrom', String(id.data));
+      // not cached: an admin may undo the merge, and a browser keeps a cached 301 for good
+      res.set('Cache-Control', 'no-store').redirect(301, `/cases/${destination}${suffix}?${query.toString()}`);
+    });
+  }
   return router;
 }

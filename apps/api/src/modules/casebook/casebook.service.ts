@@ -10,6 +10,8 @@ import {
   type CaseFlag,
   type CaseListQuery,
   type CaseListResponse,
+  type CaseMergeInput,
+  type CaseMergeSummary,
   type CasePageQuery,
   type CaseRevision,
   type CaseRevisionSnapshot,
@@ -32,6 +34,7 @@ import type {
   CasebookRepository,
 } from './casebook.repository';
 import { nameCandidates, renderCaseMarkdown, type BoardNames } from './case-markdown';
+import { caseMergeRecordSchema, countMoves, rowsLeftBehind, type CaseMergeRecord } from './case-merge-record';
 
 export type CaseModerationAction = 'lock' | 'unlock' | 'hide' | 'restore';
 
@@ -43,8 +46,11 @@ const scorer: CaseScorer = (votes, confirmedBy) => {
   return { ups: evidence.ups, downs: evidence.downs, confirmations: evidence.confirmations, rankScore: caseRankScore(evidence) };
 };
 
+/** The fields and links a revision records (a merge's revision carries the duplicate's besides). */
+type SnapshotField = Exclude<keyof CaseRevisionSnapshot, 'merged'>;
+
 /** Field names as people read them, in the order revisions list them. */
-const fieldLabels: Record<keyof CaseRevisionSnapshot, string> = {
+const fieldLabels: Record<SnapshotField, string> = {
   status: 'status',
   title: 'title',
   symptom: 'symptom',
@@ -57,11 +63,20 @@ const fieldLabels: Record<keyof CaseRevisionSnapshot, string> = {
   nets: 'nets',
   components: 'parts',
 };
-const snapshotKeys = Object.keys(fieldLabels) as (keyof CaseRevisionSnapshot)[];
+const snapshotKeys = Object.keys(fieldLabels) as SnapshotField[];
 
 function sentenceList(items: string[]): string {
   if (items.length <= 1) return items.join('');
   return `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`;
+}
+
+/** Names a full-text search should find a case by, beside its text: its nets and parts. */
+function searchTextOf(nets: { name: string }[], components: { refdes: string }[]): string {
+  return [...nets.map((n) => n.name), ...components.map((c) => c.refdes)].join(' ');
+}
+
+function changedFields(before: CaseRevisionSnapshot, after: CaseRevisionSnapshot): SnapshotField[] {
+  return snapshotKeys.filter((key) => JSON.stringify(before[key]) !== JSON.stringify(after[key]));
 }
 
 function invalid(issues: { field: string; message: string }[]): AppError {
@@ -96,6 +111,53 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     return record;
   }
 
+  /** A merged-away case lives on in the case it was merged into: every change goes there instead. */
+  function refuseMerged(record: CaseRecord) {
+    if (record.mergedIntoId !== null) {
+      throw new AppError(409, 'case_merged', `Case ${record.id} was merged into case ${record.mergedIntoId}: make changes there`, {
+        mergedIntoId: record.mergedIntoId,
+      });
+    }
+  }
+
+  /** A case the viewer may see and that takes changes (it was not merged away). */
+  async function writableCase(id: number, viewer: Viewer): Promise<CaseRecord> {
+    const record = await visibleCase(id, viewer);
+    refuseMerged(record);
+    return record;
+  }
+
+  /** Why a moderator cannot fold `from` into `into`, if they cannot. */
+  function refuseMerge(from: CaseRecord, into: CaseRecord) {
+    if (from.mergedIntoId !== null) {
+      throw new AppError(409, 'case_merged', `Case ${from.id} was already merged into case ${from.mergedIntoId}`, {
+        mergedIntoId: from.mergedIntoId,
+      });
+    }
+    if (into.mergedIntoId !== null) {
+      throw new AppError(
+        409,
+        'case_merged',
+        `Case ${into.id} was itself merged into case ${into.mergedIntoId}: merge into that case instead`,
+        { field: 'intoCaseId', mergedIntoId: into.mergedIntoId },
+      );
+    }
+    if (from.boardId !== into.boardId) {
+      throw new AppError(
+        409,
+        'different_boards',
+        `Case ${from.id} is on board "${from.boardSlug}" and case ${into.id} on board "${into.boardSlug}": only cases of one board can be merged`,
+        { field: 'intoCaseId', boards: [from.boardSlug, into.boardSlug] },
+      );
+    }
+    // a draft is its author's own until published: nobody else folds it anywhere or anything into it
+    for (const [record, field] of [[from, 'id'], [into, 'intoCaseId']] as const) {
+      if (record.status === 'draft') {
+        throw new AppError(409, 'not_published', `Case ${record.id} is a draft: only published cases can be merged`, { field });
+      }
+    }
+  }
+
   /** A locked case keeps what it has; nothing new is added to it or changed in it. */
   function refuseLocked(record: CaseRecord, what: string) {
     if (record.lockedAt !== null) {
@@ -105,7 +167,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
 
   /** A published case someone other than its author acts on: votes and confirmations. */
   async function othersPublishedCase(id: number, viewer: SessionUser, what: 'vote' | 'confirmation'): Promise<CaseRecord> {
-    const record = await visibleCase(id, viewer);
+    const record = await writableCase(id, viewer);
     if (record.authorId === viewer.id) {
       throw new AppError(403, 'own_case', what === 'vote' ? 'You cannot vote on your own case' : 'You cannot confirm your own case');
     }
@@ -179,8 +241,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
       readings,
       nets,
       components,
-      // names a full-text search should find the case by, beside its text
-      searchText: [...nets.map((n) => n.name), ...components.map((c) => c.refdes)].join(' '),
+      searchText: searchTextOf(nets, components),
     };
   }
 
@@ -224,12 +285,14 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
   });
 
   async function detail(record: CaseRecord, viewer: Viewer): Promise<CaseDetail> {
-    const [summary, readings, components, received, names] = await Promise.all([
+    const [summary, readings, components, received, names, mergedFrom] = await Promise.all([
       cases.summaryOf(record.id, viewer?.id ?? null),
       cases.readingsOf(record.id),
       cases.componentsOf(record.id),
       cases.receivedBy(record.authorId),
       boardNamesFor(record.boardId, record.boardSlug, record.rootCause, record.fixSteps, record.body),
+      // a hidden case's title is not given away through the case it was merged into
+      cases.mergedFrom(record.id, isModerator(viewer)),
     ]);
     if (!summary) throw caseNotFound(record.id);
     return {
@@ -250,6 +313,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
         hiddenAt: record.hiddenAt?.toISOString() ?? null,
         hiddenReason: record.hiddenReason,
       },
+      mergedFrom,
     };
   }
 
@@ -268,7 +332,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
   async function changeableComment(commentId: number, viewer: SessionUser, action: string) {
     const comment = await cases.findComment(commentId);
     if (!comment || comment.deleted) throw AppError.notFound(`Comment ${commentId}`);
-    const record = await visibleCase(comment.caseId, viewer);
+    const record = await writableCase(comment.caseId, viewer);
     const own = comment.authorId === viewer.id;
     if (!own && !isModerator(viewer)) throw forbidden(`You can only ${action} your own comments`);
     if (!isModerator(viewer)) refuseLocked(record, 'edits');
@@ -306,12 +370,30 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
       return detail((await cases.findCase(id))!, author);
     },
 
-    async get(id: number, viewer: Viewer): Promise<CaseDetail> {
-      return detail(await visibleCase(id, viewer), viewer);
+    /** A case, or the case it was merged into (for the reader to be sent there). */
+    async get(id: number, viewer: Viewer): Promise<{ case: CaseDetail } | { mergedInto: { id: number } }> {
+      const record = await visibleCase(id, viewer);
+      if (record.mergedIntoId !== null) return { mergedInto: { id: record.mergedIntoId } };
+      return { case: await detail(record, viewer) };
+    },
+
+    /**
+     * Where an old link to a case should lead: the end of its chain of merges (A into B, B later into C),
+     * followed a few steps at most; null when the case was not merged or does not exist.
+     */
+    async mergeDestination(id: number): Promise<number | null> {
+      let destination: number | null = null;
+      for (let step = 0, at = id; step < 5; step++) {
+        const next = await cases.mergedIntoOf(at);
+        if (next === null || next === undefined) break;
+        destination = next;
+        at = next;
+      }
+      return destination;
     },
 
     async update(id: number, change: CaseUpdate, editor: SessionUser): Promise<CaseDetail> {
-      const record = await visibleCase(id, editor);
+      const record = await writableCase(id, editor);
       if (record.authorId !== editor.id) throw forbidden('Only the author can edit a case');
       refuseLocked(record, 'edits');
       if (record.status === 'published' && change.status === 'draft') {
@@ -329,9 +411,8 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
         : null;
       const { readings: _r, nets: _n, components: _c, ...fieldChange } = change;
       const fields: CaseFields = { ...fieldsOf(record), ...fieldChange };
-      const oldSnapshot = snapshotOf(fieldsOf(record), before);
       const newSnapshot = snapshotOf(fields, links ?? before);
-      const changed = snapshotKeys.filter((key) => JSON.stringify(oldSnapshot[key]) !== JSON.stringify(newSnapshot[key]));
+      const changed = changedFields(snapshotOf(fieldsOf(record), before), newSnapshot);
       if (changed.length === 0) return detail(record, editor);
       const publish = record.status === 'draft' && fields.status === 'published';
       const edits = changed.filter((key) => key !== 'status').map((key) => fieldLabels[key]);
@@ -348,7 +429,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     },
 
     async remove(id: number, user: SessionUser): Promise<void> {
-      const record = await visibleCase(id, user);
+      const record = await writableCase(id, user);
       if (record.authorId !== user.id) throw forbidden('Only the author can delete a case');
       if (record.status === 'published') {
         throw new AppError(409, 'already_published', 'A published case cannot be deleted: others may have voted on it, confirmed it or commented');
@@ -473,7 +554,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     },
 
     async addComment(id: number, body: string, user: SessionUser): Promise<CaseComment> {
-      const record = await visibleCase(id, user);
+      const record = await writableCase(id, user);
       if (record.status !== 'published') throw new AppError(409, 'not_published', 'Only published cases take comments');
       refuseLocked(record, 'new comments');
       // nobody is told about their own comment
@@ -529,7 +610,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
 
     /** lock, unlock, hide, restore: a moderator's change of a case's state, each with its audit row. */
     async moderateCase(id: number, action: CaseModerationAction, reason: string, moderator: SessionUser): Promise<CaseDetail> {
-      const record = await visibleCase(id, moderator);
+      const record = await writableCase(id, moderator);
       const refuse = (code: string, message: string) => new AppError(409, code, message);
       let change: CaseModerationChange;
       switch (action) {
@@ -561,6 +642,146 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
       return detail((await cases.findCase(id))!, moderator);
     },
 
+    /**
+     * Folds a duplicate case into the case it repeats, in one transaction holding both case rows. Rows
+     * move by changing their case, nothing is deleted: what the kept case already has (a link, a
+     * person's vote or confirmation) stays on the duplicate. The duplicate's text is kept in a revision
+     * of the kept case, and the audit row lists every moved row so that an admin can undo the merge.
+     */
+    async merge(fromId: number, input: CaseMergeInput, moderator: SessionUser): Promise<{ case: CaseDetail; merge: CaseMergeSummary }> {
+      const intoId = input.intoCaseId;
+      if (fromId === intoId) throw invalid([{ field: 'intoCaseId', message: `case ${fromId} cannot be merged into itself` }]);
+      const summary = await cases.withCasesLocked([fromId, intoId], async (store): Promise<CaseMergeSummary> => {
+        const from = await store.findCase(fromId);
+        if (!from) throw caseNotFound(fromId);
+        const into = await store.findCase(intoId);
+        if (!into) throw new AppError(404, 'not_found', `Case ${intoId} was not found`, { field: 'intoCaseId' });
+        refuseMerge(from, into);
+
+        const fromBefore = snapshotOf(fieldsOf(from), await store.linksOf(fromId));
+        const intoBefore = snapshotOf(fieldsOf(into), await store.linksOf(intoId));
+        const { moved, culpritMarked } = await store.moveToKept(fromId, intoId, into.authorId);
+        const keptOnDuplicate = await store.linkedRowCounts(fromId);
+        await store.setMergedInto(fromId, intoId);
+        const fromLinks = await store.linksOf(fromId);
+        const intoLinks = await store.linksOf(intoId);
+        await store.refresh(fromId, searchTextOf(fromLinks.nets, fromLinks.components), scorer);
+        await store.refresh(intoId, searchTextOf(intoLinks.nets, intoLinks.components), scorer);
+        const intoAfter = snapshotOf(fieldsOf(into), intoLinks);
+        const revisionId = await store.insertRevision(intoId, {
+          editorId: moderator.id,
+          snapshot: { ...intoAfter, merged: { caseId: fromId, snapshot: fromBefore } },
+          changed: changedFields(intoBefore, intoAfter),
+          summary: `merged case #${fromId} “${from.title}” into this case`,
+        });
+        const record: CaseMergeRecord = { intoCaseId: intoId, boardId: into.boardId, moved, culpritMarked, keptOnDuplicate, revisionId };
+        const auditId = await store.writeAudit({
+          actorId: moderator.id,
+          action: 'case.merge',
+          targetType: 'case',
+          targetId: String(fromId),
+          reason: input.reason,
+          details: { ...record, board: into.boardSlug, fromTitle: from.title, intoTitle: into.title },
+        });
+        if (from.authorId !== moderator.id) {
+          await store.notify({
+            userId: from.authorId,
+            kind: 'case_merged',
+            payload: {
+              caseId: fromId,
+              caseTitle: from.title,
+              intoCaseId: intoId,
+              intoCaseTitle: into.title,
+              mergedByName: displayName(moderator),
+              reason: input.reason,
+            },
+          });
+        }
+        return { auditId, fromCaseId: fromId, intoCaseId: intoId, moved: countMoves(moved), keptOnDuplicate };
+      });
+      return { case: await detail((await cases.findCase(intoId))!, moderator), merge: summary };
+    },
+
+    /**
+     * An admin takes a merge back through its audit row: the recorded rows still on the kept case go
+     * home (readings to their old positions), the culprit marks the merge set are cleared, and the
+     * duplicate is a case of its own again. Rows deleted since are reported, not invented.
+     */
+    async undoMerge(entryId: number, reason: string, admin: SessionUser): Promise<{ entryId: number; fromCase: CaseDetail; intoCase: CaseDetail }> {
+      const entry = await cases.auditEntry(entryId);
+      if (!entry) throw AppError.notFound(`Audit entry ${entryId}`);
+      if (entry.action !== 'case.merge') {
+        throw new AppError(400, 'not_undoable', `Only case merges can be undone; audit entry ${entryId} records ${entry.action}`, { field: 'id' });
+      }
+      const parsed = caseMergeRecordSchema.safeParse(entry.details);
+      const fromId = Number(entry.targetId);
+      if (!parsed.success || entry.targetType !== 'case' || !Number.isInteger(fromId)) {
+        throw new AppError(409, 'undo_unavailable', `Audit entry ${entryId} does not list the rows its merge moved, so it cannot be undone`);
+      }
+      const merge = parsed.data;
+      const intoId = merge.intoCaseId;
+      const unmergeId = await cases.withCasesLocked([fromId, intoId], async (store) => {
+        const undoneBy = await store.undoOf(entryId, fromId);
+        if (undoneBy !== null) {
+          throw new AppError(409, 'already_undone', `The merge in audit entry ${entryId} was already undone (audit entry ${undoneBy})`, {
+            undoneByEntryId: undoneBy,
+          });
+        }
+        const from = await store.findCase(fromId);
+        const into = await store.findCase(intoId);
+        if (!from || !into) {
+          throw new AppError(409, 'undo_unavailable', `Case ${from ? intoId : fromId} no longer exists, so the merge cannot be undone`);
+        }
+        if (from.mergedIntoId !== intoId) {
+          throw new AppError(409, 'not_merged', `Case ${fromId} is no longer merged into case ${intoId}`);
+        }
+        if (into.mergedIntoId !== null) {
+          throw new AppError(409, 'case_merged', `Case ${intoId} has since been merged into case ${into.mergedIntoId}: undo that merge first`, {
+            mergedIntoId: into.mergedIntoId,
+          });
+        }
+
+        const intoBefore = snapshotOf(fieldsOf(into), await store.linksOf(intoId));
+        const { back, culpritCleared } = await store.moveBack(fromId, intoId, merge.moved, merge.culpritMarked);
+        await store.setMergedInto(fromId, null);
+        const fromLinks = await store.linksOf(fromId);
+        const intoLinks = await store.linksOf(intoId);
+        await store.refresh(fromId, searchTextOf(fromLinks.nets, fromLinks.components), scorer);
+        await store.refresh(intoId, searchTextOf(intoLinks.nets, intoLinks.components), scorer);
+        const intoAfter = snapshotOf(fieldsOf(into), intoLinks);
+        const revisionId = await store.insertRevision(intoId, {
+          editorId: admin.id,
+          snapshot: intoAfter,
+          changed: changedFields(intoBefore, intoAfter),
+          summary: `undid the merge of case #${fromId} “${from.title}” into this case`,
+        });
+        const leftBehind = rowsLeftBehind(merge.moved, back);
+        return store.writeAudit({
+          actorId: admin.id,
+          action: 'case.unmerge',
+          targetType: 'case',
+          targetId: String(fromId),
+          reason,
+          details: {
+            undoes: entryId,
+            intoCaseId: intoId,
+            boardId: into.boardId,
+            movedBack: countMoves(back),
+            // rows the kept case no longer had (its author replaced its links since the merge)
+            skipped: countMoves(leftBehind),
+            skippedRows: leftBehind,
+            culpritMarksCleared: culpritCleared.length,
+            revisionId,
+          },
+        });
+      });
+      const [fromCase, intoCase] = await Promise.all([
+        cases.findCase(fromId).then((record) => detail(record!, admin)),
+        cases.findCase(intoId).then((record) => detail(record!, admin)),
+      ]);
+      return { entryId: unmergeId, fromCase, intoCase };
+    },
+
     async moderateComment(commentId: number, action: 'hide' | 'restore', reason: string, moderator: SessionUser): Promise<CaseComment> {
       const { comment, record } = await moderatedComment(commentId, moderator);
       if (action === 'hide' && comment.hidden) throw new AppError(409, 'already_hidden', `Comment ${commentId} is already hidden`);
@@ -581,11 +802,11 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
     async flag(target: 'case' | 'comment', contentId: number, reason: string, flagger: SessionUser): Promise<CaseFlag> {
       let record: CaseRecord;
       if (target === 'case') {
-        record = await visibleCase(contentId, flagger);
+        record = await writableCase(contentId, flagger);
       } else {
         const comment = await cases.findComment(contentId);
         if (!comment || comment.deleted) throw AppError.notFound(`Comment ${contentId}`);
-        record = await visibleCase(comment.caseId, flagger);
+        record = await writableCase(comment.caseId, flagger);
         if (comment.hidden && comment.authorId !== flagger.id && !isModerator(flagger)) throw AppError.notFound(`Comment ${contentId}`);
       }
       const flagId = await cases.insertFlag(

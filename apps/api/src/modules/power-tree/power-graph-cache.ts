@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 // One power graph per board, built on first use and kept in the API process. Any write to a board's
 // netlist or links sends NOTIFY railyard_board_changed (inside its transaction, so it arrives at commit),
 // and every process listening drops that board's graph. If the listening connection is lost, the whole
@@ -23,11 +24,23 @@ export interface CachedBoard {
   graph: PowerGraph;
   rootNet: string | null;
   /** The JSON text of `key`'s trace, made by `serialise` the first time and kept while the graph is. */
-  traceJson(key: string, serialise: () => string): string;
+  traceJson(key: string, serialise: () => string): TraceJson;
+}
+
+/** A trace as sent: the JSON text and its entity tag, hashed once instead of on every response. */
+export interface TraceJson {
+  text: string;
+  etag: string;
+}
+
+/** A weak tag of the same form Express makes (`W/"<length hex>-<sha1 base64, 27 chars>"`). */
+export function weakEtag(text: string): string {
+  const hash = createHash('sha1').update(text, 'utf8').digest('base64').slice(0, 27);
+  return `W/"${Buffer.byteLength(text, 'utf8').toString(16)}-${hash}"`;
 }
 
 function cachedBoard(id: number, graph: PowerGraph, rootNet: string | null): CachedBoard {
-  const traces = new Map<string, string>();
+  const traces = new Map<string, TraceJson>();
   return {
     id,
     graph,
@@ -36,9 +49,10 @@ function cachedBoard(id: number, graph: PowerGraph, rootNet: string | null): Cac
       const held = traces.get(key);
       if (held !== undefined) return held;
       const text = serialise();
+      const trace = { text, etag: weakEtag(text) };
       if (traces.size >= tracesKeptPerBoard) traces.delete(traces.keys().next().value as string);
-      traces.set(key, text);
-      return text;
+      traces.set(key, trace);
+      return trace;
     },
   };
 }

@@ -1,7 +1,7 @@
 import type { NetDetail, PowerTree, TreeDirection } from '@railyard/shared';
 import { AppError } from '../../lib/app-error';
 import type { BoardsRepository } from '../boards/boards.repository';
-import type { PowerGraphCache } from './power-graph-cache';
+import type { PowerGraphCache, TraceJson } from './power-graph-cache';
 
 export function createPowerTreeService(deps: { boards: BoardsRepository; cache: PowerGraphCache }) {
   const { boards, cache } = deps;
@@ -43,7 +43,7 @@ export function createPowerTreeService(deps: { boards: BoardsRepository; cache: 
      * from the root reads nothing from the database (the board summary alone, which counts every
      * pin, cost more than the whole trace), one from a named rail only looks the name up.
      */
-    async getTreeJson(slug: string, name: string | null, direction: TreeDirection, depth: number): Promise<string> {
+    async getTreeJson(slug: string, name: string | null, direction: TreeDirection, depth: number): Promise<TraceJson> {
       const board = await cache.boardBySlug(slug);
       if (!board) throw AppError.notFound(`Board "${slug}"`);
       let start: string;

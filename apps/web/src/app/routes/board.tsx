@@ -1,6 +1,7 @@
 import { useQuery, type QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Navigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
+import { paths } from '../../config/paths';
 import { useSignedInUser } from '../../features/auth/api/get-me';
 import { boardQueryOptions, useBoard } from '../../features/boards/api/get-board';
 import { netsQueryOptions } from '../../features/boards/api/get-nets';
@@ -9,10 +10,17 @@ import { BoardNets } from '../../features/boards/components/board-nets';
 import { RailSearchBox } from '../../features/rails/components/rail-search-box';
 import { hasRole } from '../../lib/roles';
 
+// Case text once linked parts as /boards/:slug?component=R1. Such an address now hands over to the
+// part's page, replacing itself in the history so that Back does not bounce off it again. The
+// hand-over happens once the address is in the history: a loader's redirect during an in-app
+// navigation would replace the page the reader came from instead.
+const oldPartLink = (search: URLSearchParams) => search.get('component') || null;
+
 export const clientLoader =
   (queryClient: QueryClient) =>
-  async ({ params }: LoaderFunctionArgs) => {
+  async ({ params, request }: LoaderFunctionArgs) => {
     const slug = params.slug ?? '';
+    if (oldPartLink(new URL(request.url).searchParams)) return null;
     await Promise.all([
       queryClient.ensureQueryData(boardQueryOptions(slug)),
       queryClient.ensureQueryData(netsQueryOptions(slug)),
@@ -22,6 +30,12 @@ export const clientLoader =
 
 export default function BoardRoute() {
   const slug = useParams().slug ?? '';
+  const refdes = oldPartLink(useSearchParams()[0]);
+  if (refdes) return <Navigate replace to={paths.component.getHref(slug, refdes)} />;
+  return <BoardPage slug={slug} />;
+}
+
+function BoardPage({ slug }: { slug: string }) {
   const { data: board } = useBoard(slug);
   // Already loaded for the nets table below; its errors are shown there, not here.
   const nets = useQuery(netsQueryOptions(slug)).data?.nets;

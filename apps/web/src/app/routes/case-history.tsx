@@ -1,6 +1,6 @@
 // The saved versions of one case.
 import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, redirect, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/layout/page-header';
 import { paths } from '../../config/paths';
 import { caseQueryOptions, useCase } from '../../features/casebook/api/get-case';
@@ -12,10 +12,15 @@ export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
     const id = caseIdOf(params.id);
-    await Promise.all([
-      queryClient.ensureQueryData(caseQueryOptions(id)),
-      queryClient.ensureQueryData(revisionsQueryOptions(id)),
-    ]);
+    const revisions = queryClient.ensureQueryData(revisionsQueryOptions(id));
+    const detail = await queryClient.ensureQueryData(caseQueryOptions(id));
+    // A merged case's history goes on with the case it was merged into, which keeps its write-up.
+    if (detail.id !== id) {
+      revisions.catch(() => undefined);
+      queryClient.setQueryData(caseQueryOptions(detail.id).queryKey, detail);
+      return redirect(paths.caseHistory.getHref(detail.id));
+    }
+    await revisions;
     return null;
   };
 

@@ -1,6 +1,7 @@
 // One audit row in words: what was done, to what, and the details worth reading. The actions and
-// their details are the ones the API writes (apps/api: users.repository.ts, board-edits.repository.ts);
-// an action this client does not know yet is still shown, with its details as they came.
+// their details are the ones the API writes (apps/api: users.repository.ts, board-edits.repository.ts,
+// casebook.service.ts); an action this client does not know yet is still shown, with its details as
+// they came.
 import type { AuditEntry } from '@railyard/shared';
 
 export type AuditLine = {
@@ -35,6 +36,55 @@ function record(value: unknown): Record<string, unknown> {
     : {};
 }
 
+const countWords: Record<string, [one: string, many: string]> = {
+  nets: ['net link', 'net links'],
+  components: ['part link', 'part links'],
+  readings: ['reading', 'readings'],
+  attachments: ['photo or file', 'photos and files'],
+  comments: ['comment', 'comments'],
+  confirmations: ['confirmation', 'confirmations'],
+  votes: ['vote', 'votes'],
+};
+
+/**
+ * Rows of each kind a merge moved, as "3 readings, 1 comment": from counts, or from the lists of row
+ * ids the merge entry records. Kinds with none are left out; "nothing" when all are.
+ */
+export function rowCountsText(value: unknown): string {
+  const parts = Object.entries(record(value)).flatMap(([kind, rows]) => {
+    const count = Array.isArray(rows) ? rows.length : typeof rows === 'number' ? rows : 0;
+    if (count === 0) return [];
+    const [one, many] = countWords[kind] ?? [kind, kind];
+    return [`${count.toLocaleString('en')} ${count === 1 ? one : many}`];
+  });
+  return parts.length === 0 ? 'nothing' : parts.join(', ');
+}
+
+/** "#12 “No boot after a drop”", or "#12" when the entry kept no title. */
+function caseLabel(id: unknown, title: unknown): string {
+  const number = `#${auditValueText(id)}`;
+  return typeof title === 'string' && title !== '' ? `${number} “${title}”` : number;
+}
+
+const caseActionVerb: Record<string, string> = {
+  'case.lock': 'locked the case',
+  'case.unlock': 'unlocked the case',
+  'case.hide': 'hid the case',
+  'case.restore': 'restored the case',
+};
+
+const commentActionVerb: Record<string, string> = {
+  'comment.hide': 'hid the comment',
+  'comment.restore': 'restored the comment',
+  'comment.edit': 'edited the comment',
+  'comment.delete': 'deleted the comment',
+};
+
+/** A detail only worth a line when it says something (a count above zero, a value given). */
+function detailIf(show: boolean, label: string, value: string): Array<[string, string]> {
+  return show ? [[label, value]] : [];
+}
+
 /** What is left of `details` once `used` keys are shown their own way. */
 function remaining(details: Record<string, unknown>, used: readonly string[]) {
   return Object.entries(details)
@@ -48,9 +98,18 @@ export function describeAuditEntry(
   loginOf: (userId: string) => string | undefined,
 ): AuditLine {
   const { details } = entry;
-  const board: Array<[string, string]> =
-    details.board === undefined ? [] : [['board', `#${auditValueText(details.board)}`]];
+  // Board edits record the board's id, casebook actions its slug.
+  const board = detailIf(
+    details.board !== undefined,
+    'board',
+    typeof details.board === 'number' ? `#${details.board}` : auditValueText(details.board),
+  );
   const person = () => loginOf(entry.targetId) ?? `user #${entry.targetId}`;
+  const someone = (id: unknown): string => {
+    const key = auditValueText(id);
+    return loginOf(key) ?? `user #${key}`;
+  };
+  const author = detailIf(details.author !== undefined, 'author', someone(details.author));
 
   switch (entry.action) {
     case 'user.role':
@@ -93,6 +152,106 @@ export function describeAuditEntry(
         details: [
           ['root', change(details.from, details.to)],
           ...remaining(details, ['from', 'to']),
+        ],
+      };
+    case 'case.merge': {
+      const leftBehind = rowCountsText(details.keptOnDuplicate);
+      const culprits = Array.isArray(details.culpritMarked) ? details.culpritMarked.length : 0;
+      return {
+        what: 'merged the case',
+        target: caseLabel(entry.targetId, details.fromTitle),
+        details: [
+          ['into', caseLabel(details.intoCaseId, details.intoTitle)],
+          ['moved', rowCountsText(details.moved)],
+          ...detailIf(leftBehind !== 'nothing', 'left on the duplicate', leftBehind),
+          ...detailIf(culprits > 0, 'culprits marked', String(culprits)),
+          ...board,
+          ...remaining(details, [
+            'intoCaseId',
+            'intoTitle',
+            'fromTitle',
+            'moved',
+            'keptOnDuplicate',
+            'culpritMarked',
+            'board',
+            'boardId',
+            'revisionId',
+          ]),
+        ],
+      };
+    }
+    case 'case.unmerge': {
+      const skipped = rowCountsText(details.skipped);
+      const cleared =
+        typeof details.culpritMarksCleared === 'number' ? details.culpritMarksCleared : 0;
+      return {
+        what: 'undid the merge of the case',
+        target: `#${entry.targetId}`,
+        details: [
+          ['undoes', `entry #${auditValueText(details.undoes)}`],
+          ['kept case', `#${auditValueText(details.intoCaseId)}`],
+          ['moved back', rowCountsText(details.movedBack)],
+          ...detailIf(skipped !== 'nothing', 'no longer there', skipped),
+          ...detailIf(cleared > 0, 'culprit marks cleared', String(cleared)),
+          ...remaining(details, [
+            'undoes',
+            'intoCaseId',
+            'boardId',
+            'movedBack',
+            'skipped',
+            'skippedRows',
+            'culpritMarksCleared',
+            'revisionId',
+          ]),
+        ],
+      };
+    }
+    case 'case.lock':
+    case 'case.unlock':
+    case 'case.hide':
+    case 'case.restore':
+      return {
+        what: caseActionVerb[entry.action] ?? entry.action,
+        target: `#${entry.targetId}`,
+        details: [...author, ...board, ...remaining(details, ['author', 'board'])],
+      };
+    case 'comment.hide':
+    case 'comment.restore':
+    case 'comment.edit':
+    case 'comment.delete': {
+      const text: Array<[string, string]> =
+        entry.action === 'comment.edit'
+          ? [
+              ['before', auditValueText(details.before)],
+              ['after', auditValueText(details.after)],
+            ]
+          : entry.action === 'comment.delete'
+            ? [['text', auditValueText(details.body)]]
+            : [];
+      return {
+        what: commentActionVerb[entry.action] ?? entry.action,
+        target:
+          details.case === undefined
+            ? `#${entry.targetId}`
+            : `#${entry.targetId} on case #${auditValueText(details.case)}`,
+        details: [
+          ...author,
+          ...text,
+          ...remaining(details, ['case', 'author', 'before', 'after', 'body']),
+        ],
+      };
+    }
+    case 'flag.resolve':
+      return {
+        what: 'resolved the report of',
+        target:
+          typeof details.contentType === 'string' && details.contentId !== undefined
+            ? `${details.contentType} #${auditValueText(details.contentId)}`
+            : `report #${entry.targetId}`,
+        details: [
+          ['report', `#${entry.targetId}`],
+          ...detailIf(details.flagger !== undefined, 'reported by', someone(details.flagger)),
+          ...remaining(details, ['contentType', 'contentId', 'flagger']),
         ],
       };
     default:

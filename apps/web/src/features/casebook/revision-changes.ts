@@ -5,7 +5,8 @@ import { outcomeLabel } from './case-vocabulary';
 import { formatReading, readingModeShort } from './reading-format';
 import { formatMinutes } from './time-spent';
 
-export type SnapshotField = keyof CaseRevisionSnapshot;
+/** The case's own fields; `merged` is the text of another case, shown apart from the changes. */
+export type SnapshotField = Exclude<keyof CaseRevisionSnapshot, 'merged'>;
 
 /** Field names as people read them, in the order the API lists changes. */
 export const snapshotFieldLabel: Record<SnapshotField, string> = {
@@ -24,7 +25,10 @@ export const snapshotFieldLabel: Record<SnapshotField, string> = {
 
 const fieldOrder = Object.keys(snapshotFieldLabel) as SnapshotField[];
 
-export function snapshotText(snapshot: CaseRevisionSnapshot, field: SnapshotField): string {
+export function snapshotText(
+  snapshot: Omit<CaseRevisionSnapshot, 'merged'>,
+  field: SnapshotField,
+): string {
   switch (field) {
     case 'status':
       return snapshot.status;

@@ -1,16 +1,101 @@
 // What privileged people did, newest first: who, what, to what, when, why, and the details.
-// Older entries come a page at a time.
-import { useMemo } from 'react';
+// Older entries come a page at a time. A case merge can be taken back from its entry.
+import type { AuditEntry } from '@railyard/shared';
+import { useMemo, useState } from 'react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { ReasonField } from '../../../components/ui/reason-field';
+import { isApiError } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/date-format';
+import { reasonProblem } from '../../../lib/edit-reason';
 import { formatCount } from '../../../lib/quantity-format';
 import { useAdminUsers } from '../api/get-admin-users';
 import { useAuditLog } from '../api/get-audit-log';
+import { useUndoAuditEntry } from '../api/undo-audit-entry';
 import { describeAuditEntry } from '../audit-entry-text';
 
 const headClass = 'px-3 py-2 text-left text-xs font-medium text-ink-muted whitespace-nowrap';
 const cellClass = 'px-3 py-1.5 align-top';
+
+function UndoMergeForm({ entry, onDone }: { entry: AuditEntry; onDone: () => void }) {
+  const [reason, setReason] = useState('');
+  const [problem, setProblem] = useState<string | undefined>();
+  const undo = useUndoAuditEntry();
+  const fromApi = isApiError(undo.error) ? undo.error.fieldErrors.reason : undefined;
+  return (
+    <form
+      noValidate
+      className="space-y-3"
+      onSubmit={(event) => {
+        event.preventDefault();
+        const found = reasonProblem(reason);
+        setProblem(found);
+        if (!found) undo.mutate({ id: entry.id, reason: reason.trim() }, { onSuccess: onDone });
+      }}
+    >
+      <ReasonField
+        autoFocus
+        label="Why you undo it"
+        value={reason}
+        onChange={(value) => {
+          setReason(value);
+          if (problem) setProblem(undefined);
+        }}
+        error={problem ?? fromApi}
+        placeholder="e.g. the two cases are different faults on the same rail"
+      />
+      {undo.isError && !fromApi && <ErrorPanel compact error={undo.error} title="Not undone" />}
+      <div className="flex justify-end gap-2">
+        <Button size="sm" variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
+        <Button type="submit" size="sm" variant="danger" disabled={undo.isPending}>
+          {undo.isPending ? 'Undoing…' : 'Undo the merge'}
+        </Button>
+      </div>
+    </form>
+  );
+}
+
+/** Under a merge's entry: the way to take it back, or what became of it. */
+function MergeUndo({ entry }: { entry: AuditEntry }) {
+  const [open, setOpen] = useState(false);
+  const undo = entry.undo;
+  if (!undo) return null;
+  if (undo.undoneByEntryId !== null) {
+    return (
+      <p className="mt-0.5 text-xs text-ink-muted">
+        undone (entry <span className="font-mono">#{undo.undoneByEntryId}</span>)
+      </p>
+    );
+  }
+  if (!undo.possible) {
+    return (
+      <p
+        className="mt-0.5 text-xs text-ink-faint"
+        title="The kept case was merged on into another case (undo that merge first), or a case is gone"
+      >
+        can no longer be undone
+      </p>
+    );
+  }
+  return (
+    <>
+      <Button size="sm" className="mt-1 h-6 px-2 text-xs" onClick={() => setOpen(true)}>
+        Undo merge
+      </Button>
+      <Dialog
+        open={open}
+        onClose={() => setOpen(false)}
+        title={`Undo the merge of case #${entry.targetId}?`}
+        description="The duplicate becomes a case of its own again: the links, readings, files, comments, votes and confirmations the merge moved go back to it, and its address stops leading to the kept case. Rows removed from the kept case since are not brought back."
+      >
+        <UndoMergeForm entry={entry} onDone={() => setOpen(false)} />
+      </Dialog>
+    </>
+  );
+}
 
 export function AuditLog() {
   const log = useAuditLog();
@@ -34,7 +119,8 @@ export function AuditLog() {
       </header>
       {entries.length === 0 ? (
         <p className="px-4 py-8 text-center text-sm text-ink-muted">
-          Nothing recorded yet. Role changes, bans and edits of boards appear here.
+          Nothing recorded yet. Role changes, bans, edits of boards and moderators’ actions on cases
+          appear here.
         </p>
       ) : (
         <div className="overflow-x-auto">
@@ -86,6 +172,7 @@ export function AuditLog() {
                     <td className={cellClass}>
                       <span className="text-ink-muted">{line.what}</span>{' '}
                       <span className="font-mono wrap-break-word">{line.target}</span>
+                      <MergeUndo entry={entry} />
                     </td>
                     <td className={`${cellClass} max-w-[20rem]`}>
                       {entry.reason || <span className="text-ink-faint">no reason given</span>}

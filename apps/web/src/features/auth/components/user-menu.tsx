@@ -1,5 +1,6 @@
 // The top bar's account corner: "Sign in" for a visitor; for someone signed in, their picture,
-// login and role, opening a small panel with what their role allows, the admin page and sign-out.
+// login and role, opening a small panel with what their role allows, their pages and sign-out.
+// On a development server with a local mailbox, a link to it, for visitors too: it is open to anyone.
 import { useEffect, useId, useRef, useState } from 'react';
 import { Link, useLocation } from 'react-router-dom';
 import { Avatar } from '../../../components/ui/avatar';
@@ -16,9 +17,11 @@ const itemClass =
 type UserMenuProps = {
   /** After the session ended: the caller drops what only a signed-in role could read. */
   onSignedOut?: () => void;
+  /** whether this server keeps a local mailbox (a development server), decided by the app shell */
+  hasMailbox?: boolean;
 };
 
-export function UserMenu({ onSignedOut }: UserMenuProps) {
+export function UserMenu({ onSignedOut, hasMailbox = false }: UserMenuProps) {
   const user = useSignedInUser();
   const [open, setOpen] = useState(false);
   const id = useId();
@@ -59,7 +62,21 @@ export function UserMenu({ onSignedOut }: UserMenuProps) {
 
   // Not known yet: keep the corner's room without showing either state.
   if (user === undefined) return <span className="inline-block h-7.5 w-20" aria-hidden="true" />;
-  if (user === null) return <SignInLink />;
+  if (user === null) {
+    return (
+      <>
+        {hasMailbox && (
+          <Link
+            to={paths.mailbox.getHref()}
+            className="rounded-md px-2 py-1 text-[13px] text-ink-muted hover:text-ink"
+          >
+            Mailbox
+          </Link>
+        )}
+        <SignInLink />
+      </>
+    );
+  }
 
   return (
     <div ref={root} className="relative">
@@ -107,10 +124,26 @@ export function UserMenu({ onSignedOut }: UserMenuProps) {
           </div>
         </div>
         <div className="py-1">
+          <Link to={paths.notificationSettings.getHref()} className={itemClass}>
+            E-mail settings
+            <span className="ml-auto text-xs text-ink-faint">what you are sent</span>
+          </Link>
+          {hasRole(user, 'moderator') && (
+            <Link to={paths.moderation.getHref()} className={itemClass}>
+              Moderation queue
+              <span className="ml-auto text-xs text-ink-faint">flagged content</span>
+            </Link>
+          )}
           {hasRole(user, 'admin') && (
             <Link to={paths.admin.getHref()} className={itemClass}>
               Administration
               <span className="ml-auto text-xs text-ink-faint">people, roles, audit log</span>
+            </Link>
+          )}
+          {hasMailbox && (
+            <Link to={paths.mailbox.getHref()} className={itemClass}>
+              Mailbox
+              <span className="ml-auto text-xs text-ink-faint">mail this server sent</span>
             </Link>
           )}
           <button

@@ -77,7 +77,12 @@ function ComponentsOnNet({ slug, net }: { slug: string; net: string }) {
           {shown.map((component) => (
             <tr key={component.refdes} className="border-b border-line/70 hover:bg-raised/60">
               <td className={`${td} truncate font-mono font-medium`} title={component.refdes}>
-                {component.refdes}
+                <Link
+                  to={paths.component.getHref(slug, component.refdes)}
+                  className="text-ink hover:text-accent hover:underline"
+                >
+                  {component.refdes}
+                </Link>
               </td>
               <td className={`${td} truncate text-xs text-ink-muted`}>{component.kind}</td>
               <td className={`${td} truncate font-mono`} title={component.value || undefined}>

@@ -1,8 +1,9 @@
 // Comments under a case, in Markdown like the write-up. Everyone signed in comments on a published
-// case; people edit and delete their own; a moderator may edit or delete anyone's and says why
-// (the audit log keeps it with the old text).
+// case that is not locked; people edit and delete their own; a moderator may edit, delete, hide or
+// restore anyone's and says why (the audit log keeps it with the old text). Members report comments
+// to the moderators; a hidden comment reaches only moderators and its author, dimmed, with the reason.
 import type { CaseComment, SessionUser } from '@railyard/shared';
-import { useState, type FormEvent } from 'react';
+import { useEffect, useState, type FormEvent } from 'react';
 import { useLocation } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Avatar } from '../../../components/ui/avatar';
@@ -19,10 +20,13 @@ import { hasRole } from '../../../lib/roles';
 import { useAddComment } from '../api/add-comment';
 import { useDeleteComment } from '../api/delete-comment';
 import { useComments } from '../api/get-comments';
+import { useModerateComment } from '../api/moderate-comment';
 import { useUpdateComment } from '../api/update-comment';
 import { commentMaxLength } from '../case-vocabulary';
 import { CaseHtml } from './case-html';
 import { PersonName } from './case-marks';
+import { ModerationReasonDialog } from './moderation-reason-dialog';
+import { ReportButton } from './report-button';
 
 const markdownHint = 'Markdown. Net names and part designators of this board become links.';
 
@@ -169,24 +173,90 @@ function DeleteCommentDialog({
   );
 }
 
-function CommentItem({
+function HideCommentDialog({
   caseId,
   comment,
-  viewer,
+  open,
+  onClose,
 }: {
   caseId: number;
   comment: CaseComment;
+  open: boolean;
+  onClose: () => void;
+}) {
+  const moderate = useModerateComment(caseId);
+  const restoring = comment.hidden != null;
+  const close = () => {
+    moderate.reset();
+    onClose();
+  };
+  return (
+    <ModerationReasonDialog
+      open={open}
+      onClose={close}
+      title={restoring ? 'Restore this comment?' : 'Hide this comment?'}
+      description={
+        restoring
+          ? 'Everyone reading the case sees it again.'
+          : 'Only moderators and the person who wrote it will see it, with your reason. Nothing is deleted.'
+      }
+      reasonLabel={restoring ? 'Why you restore it' : 'Why you hide it (its author reads this)'}
+      placeholder={
+        restoring
+          ? 'e.g. the link in it was checked and is fine'
+          : 'e.g. advertises a repair service'
+      }
+      confirmLabel={restoring ? 'Restore the comment' : 'Hide the comment'}
+      tone={restoring ? 'primary' : 'danger'}
+      pending={moderate.isPending}
+      error={moderate.error}
+      onConfirm={(reason) =>
+        moderate.mutate(
+          { id: comment.id, action: restoring ? 'restore' : 'hide', reason },
+          { onSuccess: close },
+        )
+      }
+    />
+  );
+}
+
+/** The anchor a link to one comment ends in; the moderation queue links to flagged comments by it. */
+function commentAnchor(commentId: number): string {
+  return `comment-${commentId}`;
+}
+
+function CommentItem({
+  caseId,
+  comment,
+  locked,
+  viewer,
+  targeted,
+}: {
+  caseId: number;
+  comment: CaseComment;
+  locked: boolean;
   viewer: SessionUser | null | undefined;
+  /** the address points at this comment */
+  targeted: boolean;
 }) {
   const [editing, setEditing] = useState(false);
   const [deleting, setDeleting] = useState(false);
+  const [hiding, setHiding] = useState(false);
   const own = viewer != null && viewer.id === comment.author.id;
   const moderator = hasRole(viewer, 'moderator');
-  const mayChange = !comment.deleted && (own || moderator);
+  // A locked case takes no edits from commenters; moderators still tidy its thread.
+  const mayChange = !comment.deleted && (moderator || (own && !locked));
+  const mayReport = viewer != null && !own && !comment.deleted && comment.hidden == null;
+  const tools = 'h-6 px-1.5 text-xs';
 
   return (
-    <li className="flex gap-3 border-b border-line/70 px-3 py-2.5 last:border-b-0">
-      <Avatar src="" login={comment.author.login} size={24} />
+    <li
+      id={commentAnchor(comment.id)}
+      className={`flex scroll-mt-16 gap-3 border-b border-line/70 px-3 py-2.5 last:border-b-0 ${targeted ? 'bg-accent-soft/40' : ''}`}
+    >
+      <div className={comment.hidden ? 'opacity-50' : ''}>
+        <Avatar src="" login={comment.author.login} size={24} />
+      </div>
       <div className="min-w-0 flex-1">
         <div className="flex flex-wrap items-baseline gap-x-2 text-[13px]">
           <PersonName person={comment.author} />
@@ -201,28 +271,54 @@ function CommentItem({
               edited
             </span>
           )}
-          {mayChange && !editing && (
+          {!editing && (mayChange || mayReport) && (
             <span className="ml-auto flex gap-1">
-              <Button
-                size="sm"
-                variant="ghost"
-                className="h-6 px-1.5 text-xs"
-                onClick={() => setEditing(true)}
-              >
-                Edit
-              </Button>
-              <Button
-                size="sm"
-                variant="ghost"
-                className="h-6 px-1.5 text-xs"
-                onClick={() => setDeleting(true)}
-              >
-                Delete
-              </Button>
+              {mayChange && (
+                <>
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    className={tools}
+                    onClick={() => setEditing(true)}
+                  >
+                    Edit
+                  </Button>
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    className={tools}
+                    onClick={() => setDeleting(true)}
+                  >
+                    Delete
+                  </Button>
+                </>
+              )}
+              {moderator && !comment.deleted && (
+                <Button size="sm" variant="ghost" className={tools} onClick={() => setHiding(true)}>
+                  {comment.hidden ? 'Restore' : 'Hide'}
+                </Button>
+              )}
+              {mayReport && (
+                <ReportButton target={{ type: 'comment', id: comment.id }} className={tools} />
+              )}
             </span>
           )}
         </div>
-        <div className="mt-1">
+        {comment.hidden && !comment.deleted && (
+          <p className="mt-1 text-xs text-danger">
+            Hidden by a moderator on{' '}
+            <time dateTime={comment.hidden.at} className="font-mono tabular">
+              {formatDateTime(comment.hidden.at)}
+            </time>
+            {comment.hidden.reason ? `: ${comment.hidden.reason}` : ''}.{' '}
+            <span className="text-ink-muted">
+              {own
+                ? 'Only you and the moderators see it.'
+                : 'Only moderators and its author see it.'}
+            </span>
+          </p>
+        )}
+        <div className={`mt-1 ${comment.hidden && !editing ? 'opacity-60' : ''}`}>
           {comment.deleted ? (
             <p className="text-[13px] text-ink-faint italic">This comment was deleted.</p>
           ) : editing ? (
@@ -244,6 +340,14 @@ function CommentItem({
           asModerator={!own}
           open={deleting}
           onClose={() => setDeleting(false)}
+        />
+      )}
+      {moderator && !comment.deleted && (
+        <HideCommentDialog
+          caseId={caseId}
+          comment={comment}
+          open={hiding}
+          onClose={() => setHiding(false)}
         />
       )}
     </li>
@@ -293,13 +397,38 @@ function NewComment({ caseId }: { caseId: number }) {
 type CaseCommentsProps = {
   caseId: number;
   published: boolean;
+  locked: boolean;
   viewer: SessionUser | null | undefined;
 };
 
-export function CaseComments({ caseId, published, viewer }: CaseCommentsProps) {
+export function CaseComments({ caseId, published, locked, viewer }: CaseCommentsProps) {
   const comments = useComments(caseId);
-  const { pathname, search } = useLocation();
-  const count = comments.data?.filter((comment) => !comment.deleted).length ?? 0;
+  const { pathname, search, hash } = useLocation();
+  const shown = comments.data?.filter((comment) => !comment.deleted) ?? [];
+  const hiddenCount = shown.filter((comment) => comment.hidden != null).length;
+  const count = shown.length - hiddenCount;
+  // The browser scrolls to #comment-N only if the comment is there at load; it arrives later.
+  const loaded = comments.data !== undefined;
+  useEffect(() => {
+    if (!loaded || !hash.startsWith('#comment-')) return;
+    const target = document.getElementById(hash.slice(1));
+    if (!target) return;
+    const follow = () => target.scrollIntoView({ block: 'start' });
+    follow();
+    // Sections above it (the attachments) may still be loading and push it down: keep it in view
+    // for a moment, until the reader scrolls themselves.
+    const resized = new ResizeObserver(follow);
+    resized.observe(document.body);
+    const stop = () => resized.disconnect();
+    const timer = setTimeout(stop, 2000);
+    const events = ['wheel', 'touchstart', 'keydown'] as const;
+    for (const name of events) window.addEventListener(name, stop, { once: true });
+    return () => {
+      clearTimeout(timer);
+      stop();
+      for (const name of events) window.removeEventListener(name, stop);
+    };
+  }, [loaded, hash]);
   return (
     <section
       aria-labelledby="case-comments-title"
@@ -309,7 +438,12 @@ export function CaseComments({ caseId, published, viewer }: CaseCommentsProps) {
         <h2 id="case-comments-title" className="text-sm font-semibold">
           Comments
         </h2>
-        {comments.data && <span className="text-xs text-ink-muted">{formatCount(count)}</span>}
+        {comments.data && (
+          <span className="text-xs text-ink-muted">
+            {formatCount(count)}
+            {hiddenCount > 0 && ` · ${formatCount(hiddenCount)} hidden`}
+          </span>
+        )}
       </header>
       {comments.isPending ? (
         <div aria-busy="true" className="m-3 h-12 animate-pulse rounded bg-raised">
@@ -331,7 +465,14 @@ export function CaseComments({ caseId, published, viewer }: CaseCommentsProps) {
       ) : comments.data.length > 0 ? (
         <ol>
           {comments.data.map((comment) => (
-            <CommentItem key={comment.id} caseId={caseId} comment={comment} viewer={viewer} />
+            <CommentItem
+              key={comment.id}
+              caseId={caseId}
+              comment={comment}
+              locked={locked}
+              viewer={viewer}
+              targeted={hash === `#${commentAnchor(comment.id)}`}
+            />
           ))}
         </ol>
       ) : (
@@ -341,6 +482,10 @@ export function CaseComments({ caseId, published, viewer }: CaseCommentsProps) {
         {!published ? (
           <p className="px-3 py-2.5 text-[13px] text-ink-muted">
             Comments open once the case is published.
+          </p>
+        ) : locked ? (
+          <p className="px-3 py-2.5 text-[13px] text-ink-muted">
+            A moderator locked this case: it takes no new comments.
           </p>
         ) : viewer === null ? (
           <p className="px-3 py-2.5 text-[13px] text-ink-muted">

@@ -25,6 +25,9 @@ function refusal(detail: CaseDetail, viewer: SessionUser | null | undefined): st
   }
   if (detail.status !== 'published')
     return 'Votes and confirmations open once the case is published.';
+  if (detail.moderation?.lockedAt) {
+    return 'A moderator locked this case: votes and confirmations stay as they are.';
+  }
   return null;
 }
 

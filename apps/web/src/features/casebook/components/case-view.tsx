@@ -8,14 +8,18 @@ import { LinkButton } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/date-format';
 import { formatCount } from '../../../lib/quantity-format';
+import { hasRole } from '../../../lib/roles';
 import { formatMinutes } from '../time-spent';
 import { CaseAttachments } from './case-attachments';
 import { CaseComments } from './case-comments';
 import { CaseHtml } from './case-html';
 import { CulpritGlyph, NetChip, PersonName } from './case-marks';
+import { CaseModeratorPanel, CaseStateBanners } from './case-moderation';
 import { CaseScorePanel } from './case-score-panel';
+import { MergedFromLine, MergedNotices } from './merged-notices';
 import { OutcomeBadge, StatusBadge } from './outcome-badge';
 import { ReadingsTable } from './readings-table';
+import { ReportButton } from './report-button';
 
 const labelClass = 'text-[11px] font-medium tracking-wider text-ink-faint uppercase';
 
@@ -104,6 +108,8 @@ export function CaseView({ detail, viewer }: CaseViewProps) {
   const own = viewer != null && viewer.id === detail.author.id;
   const published = detail.status === 'published';
   const edited = detail.updatedAt !== (detail.publishedAt ?? detail.createdAt);
+  const locked = detail.moderation?.lockedAt != null;
+  const moderator = hasRole(viewer, 'moderator');
 
   return (
     <>
@@ -165,12 +171,16 @@ export function CaseView({ detail, viewer }: CaseViewProps) {
                 </span>
               )}
             </div>
+            <MergedFromLine detail={detail} />
           </div>
           <div className="flex gap-2">
             <LinkButton size="sm" variant="ghost" to={paths.caseHistory.getHref(detail.id)}>
               History
             </LinkButton>
-            {own && (
+            {viewer && !own && published && (
+              <ReportButton target={{ type: 'case', id: detail.id }} />
+            )}
+            {own && !locked && (
               <LinkButton
                 size="sm"
                 variant={published ? 'secondary' : 'primary'}
@@ -182,6 +192,8 @@ export function CaseView({ detail, viewer }: CaseViewProps) {
           </div>
         </div>
       </section>
+      <MergedNotices detail={detail} />
+      <CaseStateBanners detail={detail} />
 
       <div className="grid items-start gap-3 px-4 pt-3 pb-6 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-3">
@@ -216,10 +228,16 @@ export function CaseView({ detail, viewer }: CaseViewProps) {
             <CaseAttachments caseId={detail.id} authorId={detail.author.id} viewer={viewer} />
           </SectionErrorBoundary>
           <SectionErrorBoundary title="Could not show the comments" resetKeys={[detail.id]}>
-            <CaseComments caseId={detail.id} published={published} viewer={viewer} />
+            <CaseComments
+              caseId={detail.id}
+              published={published}
+              locked={locked}
+              viewer={viewer}
+            />
           </SectionErrorBoundary>
         </div>
         <div className="space-y-3 xl:sticky xl:top-14">
+          {moderator && <CaseModeratorPanel detail={detail} />}
           <CaseScorePanel detail={detail} viewer={viewer} />
           <PartsAndNets detail={detail} />
         </div>

@@ -1,26 +1,15 @@
 // While a case is written, the board's cases that look like it: same nets, the same culprit, alike
 // words. Seeing one before saving saves writing a known fix up twice; it may also be the answer.
 import type { SimilarCase } from '@railyard/shared';
-import { useEffect, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { useSimilarCases } from '../api/get-similar-cases';
+import { useSettled } from '../hooks/use-settled';
 import type { SimilarCasesParams } from '../similar-cases-query';
 import { ScoreLine } from './case-marks';
 import { OutcomeBadge } from './outcome-badge';
 
 const typingPause = 500;
-
-/** The value, once it has stopped changing for `delay` ms (compared by content, not identity). */
-function useSettled<T>(value: T, delay: number): T {
-  const [settled, setSettled] = useState(value);
-  const key = JSON.stringify(value);
-  useEffect(() => {
-    const timer = setTimeout(() => setSettled(JSON.parse(key) as T), delay);
-    return () => clearTimeout(timer);
-  }, [key, delay]);
-  return settled;
-}
 
 function reasons(found: SimilarCase): string[] {
   const why: string[] = [];

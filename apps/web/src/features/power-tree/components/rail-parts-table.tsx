@@ -273,7 +273,12 @@ export function RailPartsTable({
             {shown.map(({ original: part }) => (
               <tr key={part.refdes} className="border-b border-line/70 hover:bg-raised/60">
                 <td className={`${td} truncate font-mono font-medium`} title={part.refdes}>
-                  {part.refdes}
+                  <Link
+                    to={paths.component.getHref(slug, part.refdes)}
+                    className="text-ink hover:text-accent hover:underline"
+                  >
+                    {part.refdes}
+                  </Link>
                 </td>
                 <td className={`${td} truncate text-xs text-ink-muted`}>{part.kind}</td>
                 <td className={`${td} truncate font-mono`} title={part.value || undefined}>

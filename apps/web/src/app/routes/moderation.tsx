@@ -1,0 +1,56 @@
+// The moderators' page: reports of cases and comments sent by members, open and resolved.
+import type { QueryClient } from '@tanstack/react-query';
+import { Suspense } from 'react';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { SectionErrorBoundary } from '../../components/errors/error-boundary';
+import { PageHeader } from '../../components/layout/page-header';
+import { meQueryOptions } from '../../features/auth/api/get-me';
+import { RoleGate } from '../../features/auth/components/role-gate';
+import { flagsQueryOptions } from '../../features/moderation/api/get-flags';
+import { FlagQueue, FlagQueueTabs } from '../../features/moderation/components/flag-queue';
+import { flagStatusOf } from '../../features/moderation/flag-queue';
+import { hasRole } from '../../lib/roles';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const me = await queryClient.ensureQueryData(meQueryOptions());
+    // Anyone else gets the page's "needs the moderator role" message, without asking for a refusal.
+    if (hasRole(me.user, 'moderator')) {
+      await queryClient.ensureQueryData(
+        flagsQueryOptions(flagStatusOf(new URL(request.url).searchParams)),
+      );
+    }
+    return null;
+  };
+
+export default function ModerationRoute() {
+  const [search] = useSearchParams();
+  const status = flagStatusOf(search);
+  return (
+    <div className="mx-auto max-w-7xl px-4 py-5">
+      <title>Moderation · Railyard</title>
+      <PageHeader
+        title="Moderation"
+        description="Cases and comments members reported. Open one to read it in place and act there (hide, lock, merge), then resolve the report with what you did."
+      />
+      <RoleGate needed="moderator" action="The moderation queue">
+        <FlagQueueTabs status={status} />
+        <SectionErrorBoundary title="Could not list the reports" resetKeys={[status]}>
+          <Suspense
+            fallback={
+              <div
+                aria-busy="true"
+                className="h-40 animate-pulse rounded-lg border border-line bg-surface"
+              >
+                <span className="sr-only">Loading the reports…</span>
+              </div>
+            }
+          >
+            <FlagQueue status={status} />
+          </Suspense>
+        </SectionErrorBoundary>
+      </RoleGate>
+    </div>
+  );
+}
