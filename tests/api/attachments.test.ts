@@ -18,6 +18,7 @@ import { createLocalDiskStorage } from '../../apps/api/src/modules/attachments/a
 import { createAttachmentsRepository } from '../../apps/api/src/modules/attachments/attachments.repository';
 import { attachmentsRouter } from '../../apps/api/src/modules/attachments/attachments.routes';
 import { createAttachmentsService } from '../../apps/api/src/modules/attachments/attachments.service';
+import { samplePdf, samplePng } from '../support/sample-files';
 
 const maxBytes = 300 * 1024;
 const maxFiles = 3;
@@ -106,30 +107,7 @@ async function jpegWithGps(): Promise<Buffer> {
     .toBuffer();
 }
 
-async function png(width = 200, height = 100): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, background: '#336699' } })
-    .png()
-    .toBuffer();
-}
 
-/** The smallest well-formed PDF (ISO 32000-1 §7.5: header, objects, xref, trailer). */
-function pdf(): Buffer {
-  const objects = [
-    '<< /Type /Catalog /Pages 2 0 R >>',
-    '<< /Type /Pages /Kids [3 0 R] /Count 1 >>',
-    '<< /Type /Page /Parent 2 0 R /MediaBox [0 0 200 100] >>',
-  ];
-  let body = '%PDF-1.4\n';
-  const offsets: number[] = [];
-  objects.forEach((o, i) => {
-    offsets.push(body.length);
-    body += `${i + 1} 0 obj\n${o}\nendobj\n`;
-  });
-  const xref = body.length;
-  body += `xref\n0 4\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, '0')} 00000 n \n`).join('')}`;
-  body += `trailer\n<< /Size 4 /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
-  return Buffer.from(body, 'latin1');
-}
 
 async function storedFiles(): Promise<string[]> {
   const found: string[] = [];
@@ -167,7 +145,7 @@ describe('uploading attachments to a case', () => {
         filename: 'board top.jpg',
         contentType: 'image/jpeg',
       })
-      .attach('files', await png(), {
+      .attach('files', await samplePng(), {
         filename: 'thermal.png',
         contentType: 'application/octet-stream',
       });
@@ -223,7 +201,7 @@ describe('uploading attachments to a case', () => {
   it('accepts a PDF without a thumbnail and serves it as a download', async () => {
     const author = await person();
     const caseId = await caseBy(author);
-    const bytes = pdf();
+    const bytes = samplePdf();
 
     const res = await request(app)
       .post(`/api/cases/${caseId}/attachments`)
@@ -264,7 +242,7 @@ describe('uploading attachments to a case', () => {
       const res = await request(app)
         .post(`/api/cases/${caseId}/attachments`)
         .set(as(author))
-        .attach('files', await png(), 'fine.png')
+        .attach('files', await samplePng(), 'fine.png')
         .attach('files', bytes, { filename: 'photo.jpg', contentType: 'image/jpeg' });
 
       expect(res.status).toBe(415);
@@ -298,7 +276,7 @@ describe('uploading attachments to a case', () => {
     const author = await person();
     const caseId = await caseBy(author);
     // a PDF padded with a comment to the limit (ISO 32000-1 §7.2.4: "%" starts a comment)
-    const exact = Buffer.concat([pdf(), Buffer.alloc(maxBytes - pdf().length, 0x25)]);
+    const exact = Buffer.concat([samplePdf(), Buffer.alloc(maxBytes - samplePdf().length, 0x25)]);
     const res = await request(app)
       .post(`/api/cases/${caseId}/attachments`)
       .set(as(author))
@@ -310,7 +288,7 @@ describe('uploading attachments to a case', () => {
     const author = await person();
     const caseId = await caseBy(author);
     let req = request(app).post(`/api/cases/${caseId}/attachments`).set(as(author));
-    for (let i = 0; i <= maxFiles; i++) req = req.attach('files', pdf(), `capture-${i}.pdf`);
+    for (let i = 0; i <= maxFiles; i++) req = req.attach('files', samplePdf(), `capture-${i}.pdf`);
 
     const res = await req;
 
@@ -328,7 +306,7 @@ describe('uploading attachments to a case', () => {
     const wrong = await request(app)
       .post(`/api/cases/${caseId}/attachments`)
       .set(as(author))
-      .attach('photo', pdf(), 'a.pdf');
+      .attach('photo', samplePdf(), 'a.pdf');
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.message).toBe('Send the files in the form field "files", not "photo"');
     const none = await request(app)
@@ -346,8 +324,8 @@ describe('uploading attachments to a case', () => {
     const res = await request(app)
       .post(`/api/cases/${caseId}/attachments`)
       .set(as(author))
-      .attach('files', await png(), { filename: '../../../../etc/cron.d/evil.png' })
-      .attach('files', pdf(), { filename: '..\\..\\boot.ini.pdf' });
+      .attach('files', await samplePng(), { filename: '../../../../etc/cron.d/evil.png' })
+      .attach('files', samplePdf(), { filename: '..\\..\\boot.ini.pdf' });
 
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.attachments.map((a: { name: string }) => a.name)).toEqual([
@@ -375,7 +353,7 @@ describe('uploading attachments to a case', () => {
     const res = await request(app)
       .post(`/api/cases/${caseId}/attachments`)
       .set(as(author))
-      .attach('files', await png(), 'carte mère.png');
+      .attach('files', await samplePng(), 'carte mère.png');
     expect(res.status).toBe(201);
     expect(res.body.attachments[0].name).toBe('carte mère.png');
     const served = await download(res.body.attachments[0].url);
@@ -393,21 +371,21 @@ describe('who may attach, see and remove', () => {
     const caseId = await caseBy(author);
     const url = `/api/cases/${caseId}/attachments`;
 
-    expect((await request(app).post(url).attach('files', pdf(), 'a.pdf')).status).toBe(401);
-    const refused = await request(app).post(url).set(as(other)).attach('files', pdf(), 'a.pdf');
+    expect((await request(app).post(url).attach('files', samplePdf(), 'a.pdf')).status).toBe(401);
+    const refused = await request(app).post(url).set(as(other)).attach('files', samplePdf(), 'a.pdf');
     expect(refused.status).toBe(403);
     expect(refused.body.error.message).toBe(
       `Only the author of case ${caseId} or a moderator can attach files to it`,
     );
     expect(
-      (await request(app).post(url).set(as(moderator)).attach('files', pdf(), 'a.pdf')).status,
+      (await request(app).post(url).set(as(moderator)).attach('files', samplePdf(), 'a.pdf')).status,
     ).toBe(201);
     expect(
       (
         await request(app)
           .post('/api/cases/2147483000/attachments')
           .set(as(author))
-          .attach('files', pdf(), 'a.pdf')
+          .attach('files', samplePdf(), 'a.pdf')
       ).status,
     ).toBe(404);
   });
@@ -420,7 +398,7 @@ describe('who may attach, see and remove', () => {
     await request(app)
       .post(`/api/cases/${draft}/attachments`)
       .set(as(author))
-      .attach('files', await png(), 'a.png')
+      .attach('files', await samplePng(), 'a.png')
       .expect(201);
 
     const mine = await request(app).get(`/api/cases/${draft}/attachments`).set(as(author));
@@ -450,8 +428,8 @@ describe('who may attach, see and remove', () => {
     const upload = await request(app)
       .post(`/api/cases/${caseId}/attachments`)
       .set(as(author))
-      .attach('files', await png(), 'one.png')
-      .attach('files', await png(), 'two.png');
+      .attach('files', await samplePng(), 'one.png')
+      .attach('files', await samplePng(), 'two.png');
     const [one, two] = upload.body.attachments;
     const [rowOne] = await rowsOf(caseId);
 
@@ -474,7 +452,7 @@ describe('who may attach, see and remove', () => {
     const upload = await request(app)
       .post(`/api/cases/${caseId}/attachments`)
       .set(as(author))
-      .attach('files', await png(), 'a.png');
+      .attach('files', await samplePng(), 'a.png');
     const first = await download(upload.body.attachments[0].url);
     const again = await request(app)
       .get(upload.body.attachments[0].url)

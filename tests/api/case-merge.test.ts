@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AuditEntry, CaseDetail } from '@railyard/shared';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { casebookBoard, writeCase } from './casebook-fixtures';
+import { samplePdf } from '../support/sample-files';
 
 type Agent = Awaited<ReturnType<TestApp['agentAs']>>;
 
@@ -50,27 +51,9 @@ async function board(prefix: string): Promise<string> {
   return slug;
 }
 
-/** The smallest well-formed PDF (ISO 32000-1 §7.5: header, objects, xref, trailer). */
-function pdf(): Buffer {
-  const objects = [
-    '<< /Type /Catalog /Pages 2 0 R >>',
-    '<< /Type /Pages /Kids [3 0 R] /Count 1 >>',
-    '<< /Type /Page /Parent 2 0 R /MediaBox [0 0 200 100] >>',
-  ];
-  let body = '%PDF-1.4\n';
-  const offsets: number[] = [];
-  objects.forEach((o, i) => {
-    offsets.push(body.length);
-    body += `${i + 1} 0 obj\n${o}\nendobj\n`;
-  });
-  const xref = body.length;
-  body += `xref\n0 4\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, '0')} 00000 n \n`).join('')}`;
-  body += `trailer\n<< /Size 4 /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
-  return Buffer.from(body, 'latin1');
-}
 
 async function attach(agent: Agent, caseId: number, name: string) {
-  const res = await agent.post(`/api/cases/${caseId}/attachments`).attach('files', pdf(), name);
+  const res = await agent.post(`/api/cases/${caseId}/attachments`).attach('files', samplePdf(), name);
   expect(res.status, JSON.stringify(res.body)).toBe(201);
 }
 
@@ -542,7 +525,7 @@ describe('refused merges', () => {
       lock: await s.moderator.post(`/api/cases/${s.A}/lock`).send(reason),
       hide: await s.moderator.post(`/api/cases/${s.A}/hide`).send(reason),
       flag: await member.post(`/api/cases/${s.A}/flag`).send(reason),
-      attach: await s.authorA.post(`/api/cases/${s.A}/attachments`).attach('files', pdf(), 'late.pdf'),
+      attach: await s.authorA.post(`/api/cases/${s.A}/attachments`).attach('files', samplePdf(), 'late.pdf'),
       merge: await merge(s.moderator, s.A, s.B),
     };
 

@@ -15,8 +15,13 @@ export interface HttpResult {
   non2xx: number;
 }
 
-export async function startBenchServer(root: string, env: NodeJS.ProcessEnv) {
-  const child = spawn(path.join(root, 'node_modules/.bin/tsx'), ['tests/bench/serve-once.ts'], {
+/** A benchmark server as its own process: the API by default, or another script that prints its port. */
+export async function startBenchServer(
+  root: string,
+  env: NodeJS.ProcessEnv,
+  script: readonly string[] = ['tests/bench/serve-once.ts'],
+) {
+  const child = spawn(path.join(root, 'node_modules/.bin/tsx'), [...script], {
     cwd: root,
     env,
     stdio: ['ignore', 'pipe', 'inherit'],
@@ -88,23 +93,28 @@ export async function treeEndpointBench(
   baseUrl: string,
   slug: string,
   treeSize: { nodes: number; bytes: number },
+  /** the same bytes from a bare Express app (tests/bench/bare-express-once.ts): the machine's floor */
+  floorUrl: string,
 ): Promise<BenchSection> {
   const tree = `${baseUrl}/api/boards/${slug}/tree`;
   const live = `${baseUrl}/api/health/live`;
-  for (const url of [tree, live]) await measure(url, loadedConnections, 3);
+  for (const url of [tree, live, floorUrl]) await measure(url, loadedConnections, 3);
   const load = os.loadavg()[0]!;
   const liveRounds: HttpResult[] = [];
   const treeRounds: HttpResult[] = [];
+  const floorRounds: HttpResult[] = [];
   for (let round = 0; round < rounds; round++) {
     liveRounds.push(await measure(live, loadedConnections, roundSeconds));
     treeRounds.push(await measure(tree, loadedConnections, roundSeconds));
+    floorRounds.push(await measure(floorUrl, loadedConnections, roundSeconds));
   }
+  const floor = combined(floorRounds);
   // One request at a time: what a request costs when it does not queue behind 49 others.
   const single = [await measure(live, 1, 3), await measure(tree, 1, 3)];
   const liveLoaded = combined(liveRounds);
   const treeLoaded = combined(treeRounds);
   const ratio = treeLoaded.requestsPerSecond / liveLoaded.requestsPerSecond;
-  const failures = [liveLoaded, treeLoaded, ...single].reduce(
+  const failures = [liveLoaded, treeLoaded, floor, ...single].reduce(
     (sum, r) => sum + r.errors + r.non2xx,
     0,
   );
@@ -116,6 +126,7 @@ export async function treeEndpointBench(
     ...liveRounds.flatMap((r, i) => [
       row(r, `round ${i + 1}`),
       row(treeRounds[i]!, `round ${i + 1}`),
+      row(floorRounds[i]!, `round ${i + 1}, bare Express`),
     ]),
     row(single[0]!, 'alone'),
     row(single[1]!, 'alone'),
@@ -131,6 +142,8 @@ export async function treeEndpointBench(
       `against \`GET /api/health/live\` (static JSON, no database), both on one API process in production mode`,
       `(\`tests/bench/serve-once.ts\`), autocannon in the bench process. Each URL was warmed up for 3 s, then loaded with`,
       `${loadedConnections} connections in ${rounds} rounds of ${roundSeconds} s, the URLs taking turns; "alone" is one connection for 3 s.`,
+      `"bare Express" (\`/tree\`) is a separate process with nothing but Express 5 and one route sending the same ${(treeSize.bytes / 1024).toFixed(1)} KB`,
+      `(\`tests/bench/bare-express-once.ts\`): the floor this machine and Express set, measured in the same rounds.`,
       `Server, autocannon and PostgreSQL share the machine's ${os.cpus().length} cores; the 1-minute load average was ${load.toFixed(1)} when the loaded runs started.`,
       '',
       '| URL | run | connections | requests/s | p50 | p99 | errors |',
@@ -139,7 +152,8 @@ export async function treeEndpointBench(
       '',
       `Over the rounds the tree endpoint served **${(ratio * 100).toFixed(0)} %** of the static endpoint's requests/s`,
       `(${Math.round(treeLoaded.requestsPerSecond).toLocaleString('en')} against ${Math.round(liveLoaded.requestsPerSecond).toLocaleString('en')}; target at least ${ratioTarget * 100} % — ${ratioMet ? 'met' : '**not met**'}),`,
-      `with p99 **${treeLoaded.p99} ms** in its worse round (target under ${p99TargetMs} ms — ${p99Met ? 'met' : '**not met**'}).`,
+      `with p99 **${treeLoaded.p99} ms** in its worse round (target under ${p99TargetMs} ms — ${p99Met ? 'met' : '**not met**'});`,
+      `the bare Express app sending the same bytes had p99 ${floor.p99} ms in its worse round at ${Math.round(floor.requestsPerSecond).toLocaleString('en')} requests/s.`,
       '',
       `With ${loadedConnections} requests always in flight, latency is mostly queueing: ${loadedConnections} ÷ throughput gives a mean of about`,
       `${queued(liveLoaded)} ms for the static endpoint and ${queued(treeLoaded)} ms for the tree. A p99 under ${p99TargetMs} ms at ${loadedConnections} connections needs`,

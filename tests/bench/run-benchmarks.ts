@@ -82,7 +82,15 @@ async function serverBenches(work: string, laptopSlug: string): Promise<BenchSec
       nodes: (JSON.parse(text) as { nodes: unknown[] }).nodes.length,
       bytes: Buffer.byteLength(text),
     };
-    const sections = [await treeEndpointBench(server.url, laptopSlug, treeSize)];
+    const treeJson = path.join(work, 'laptop-tree.json');
+    writeFileSync(treeJson, text);
+    const floor = await startBenchServer(root, process.env, ['tests/bench/bare-express-once.ts', treeJson]);
+    let sections: BenchSection[];
+    try {
+      sections = [await treeEndpointBench(server.url, laptopSlug, treeSize, `${floor.url}/tree`)];
+    } finally {
+      await floor.stop();
+    }
     const browser = await launchBrowser();
     try {
       sections.push(await treePaintBench(browser, server.url, treeSlug, treeRails));

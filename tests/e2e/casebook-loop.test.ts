@@ -4,11 +4,11 @@
 // mailbox, and a moderator merges a duplicate write-up into it, after which the old address leads to
 // the kept case.
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CaseDetail } from '@railyard/shared';
 import { casebookBoard, writeCase } from '../api/casebook-fixtures';
 import { launchBrowser, signInInBrowser, startWebServer } from '../support/browser';
+import { samplePng } from '../support/sample-files';
 import { createUser } from '../support/test-app';
 
 /** Each step is a request and a redraw, which on a busy test machine takes longer than a second. */
@@ -43,12 +43,6 @@ async function personAt(login: string, returnTo: string): Promise<Page> {
   return page;
 }
 
-/** A board photo as a camera would give it: a real PNG, made here so the server's type sniffing reads it. */
-function boardPhoto(): Promise<Buffer> {
-  return sharp({ create: { width: 320, height: 240, channels: 3, background: { r: 32, g: 96, b: 64 } } })
-    .png()
-    .toBuffer();
-}
 
 describe('the casebook loop in the browser', () => {
   it('goes from a rail search to a written-up fix, a vote, a comment, its mail and a merged duplicate', async () => {
@@ -88,7 +82,7 @@ describe('the casebook loop in the browser', () => {
     await tech.getByLabel('Add photos, thermal images or scope captures').setInputFiles({
       name: 'board-top.png',
       mimeType: 'image/png',
-      buffer: await boardPhoto(),
+      buffer: await samplePng(320, 240),
     });
     await tech.getByRole('button', { name: 'Attach' }).click();
     await poll(() => tech.getByRole('link', { name: /board-top\.png/ }).count()).toBeGreaterThan(0);

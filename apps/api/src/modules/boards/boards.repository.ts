@@ -46,6 +46,41 @@ function toSummary(row: SummaryRow): BoardSummary & { id: number } {
   };
 }
 
+/** A components row as the component queries select it, with its pins aggregated as JSON. */
+type ComponentFields<Pin> = {
+  refdes: string;
+  kind: ComponentRow['kind'];
+  value: string;
+  magnitude: number | null;
+  unit: string | null;
+  tolerance: number | null;
+  rated_voltage: number | null;
+  package: string;
+  side: ComponentRow['side'];
+  x: number | null;
+  y: number | null;
+  rotation: number | null;
+  pins: Pin[];
+};
+
+function componentFromRow<Pin>(r: ComponentFields<Pin>) {
+  return {
+    refdes: r.refdes,
+    kind: r.kind,
+    value: r.value,
+    magnitude: r.magnitude,
+    unit: r.unit,
+    tolerance: r.tolerance,
+    ratedVoltage: r.rated_voltage,
+    package: r.package,
+    side: r.side,
+    x: r.x,
+    y: r.y,
+    rotation: r.rotation,
+    pins: r.pins,
+  };
+}
+
 export function createBoardsRepository(db: Database) {
   return {
     async listBoards(): Promise<BoardSummary[]> {
@@ -140,21 +175,7 @@ export function createBoardsRepository(db: Database) {
         netId === null
           ? sql``
           : sql`AND c.id IN (SELECT component_id FROM pins WHERE net_id = ${netId})`;
-      const result = await db.execute<{
-        refdes: string;
-        kind: ComponentRow['kind'];
-        value: string;
-        magnitude: number | null;
-        unit: string | null;
-        tolerance: number | null;
-        rated_voltage: number | null;
-        package: string;
-        side: ComponentRow['side'];
-        x: number | null;
-        y: number | null;
-        rotation: number | null;
-        pins: ComponentRow['pins'];
-      }>(sql`
+      const result = await db.execute<ComponentFields<ComponentRow['pins'][number]>>(sql`
         SELECT c.refdes, c.kind, c.value, c.magnitude, c.unit, c.tolerance, c.rated_voltage,
                c.package, c.side, c.x, c.y, c.rotation,
                COALESCE((
@@ -166,21 +187,7 @@ export function createBoardsRepository(db: Database) {
         FROM components c
         WHERE c.board_id = ${boardId} ${filter}
         ORDER BY c.refdes`);
-      return result.rows.map((r) => ({
-        refdes: r.refdes,
-        kind: r.kind,
-        value: r.value,
-        magnitude: r.magnitude,
-        unit: r.unit,
-        tolerance: r.tolerance,
-        ratedVoltage: r.rated_voltage,
-        package: r.package,
-        side: r.side,
-        x: r.x,
-        y: r.y,
-        rotation: r.rotation,
-        pins: r.pins,
-      }));
+      return result.rows.map(componentFromRow);
     },
 
     /**
@@ -188,22 +195,7 @@ export function createBoardsRepository(db: Database) {
      * when a board has two that differ only in case. Pins come in text order: the caller sorts them.
      */
     async findComponent(boardId: number, refdes: string) {
-      const result = await db.execute<{
-        id: number;
-        refdes: string;
-        kind: ComponentRow['kind'];
-        value: string;
-        magnitude: number | null;
-        unit: string | null;
-        tolerance: number | null;
-        rated_voltage: number | null;
-        package: string;
-        side: ComponentRow['side'];
-        x: number | null;
-        y: number | null;
-        rotation: number | null;
-        pins: ComponentPin[];
-      }>(sql`
+      const result = await db.execute<ComponentFields<ComponentPin> & { id: number }>(sql`
         SELECT c.id, c.refdes, c.kind, c.value, c.magnitude, c.unit, c.tolerance, c.rated_voltage,
                c.package, c.side, c.x, c.y, c.rotation,
                COALESCE((
@@ -220,22 +212,7 @@ export function createBoardsRepository(db: Database) {
         LIMIT 1`);
       const r = result.rows[0];
       if (!r) return null;
-      return {
-        id: r.id,
-        refdes: r.refdes,
-        kind: r.kind,
-        value: r.value,
-        magnitude: r.magnitude,
-        unit: r.unit,
-        tolerance: r.tolerance,
-        ratedVoltage: r.rated_voltage,
-        package: r.package,
-        side: r.side,
-        x: r.x,
-        y: r.y,
-        rotation: r.rotation,
-        pins: r.pins,
-      };
+      return { id: r.id, ...componentFromRow(r) };
     },
 
     /** The part's record in the casebook, counted by the same queries as the casebook's own lists. */

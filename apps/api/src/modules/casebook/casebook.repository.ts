@@ -439,6 +439,29 @@ async function linkedRowCounts(runner: Reader, caseId: number): Promise<CaseMerg
 
 const sortedIds = (rows: { id: number }[]) => rows.map((r) => r.id).sort((a, b) => a - b);
 
+type Returned<Row> = { rows: Row[] };
+
+/** The ids a merge (or its undo) moved per table, in a stable order; readings with their positions. */
+function movedRows(moved: {
+  nets: Returned<{ id: number }>;
+  components: Returned<{ id: number }>;
+  readings: Returned<{ id: number; position: number }>;
+  attachments: Returned<{ id: number }>;
+  comments: Returned<{ id: number }>;
+  confirmations: Returned<{ id: number }>;
+  votes: Returned<{ id: number }>;
+}) {
+  return {
+    nets: sortedIds(moved.nets.rows),
+    components: sortedIds(moved.components.rows),
+    readings: moved.readings.rows.map((r) => ({ id: r.id, position: r.position })).sort((a, b) => a.position - b.position),
+    attachments: sortedIds(moved.attachments.rows),
+    comments: sortedIds(moved.comments.rows),
+    confirmations: sortedIds(moved.confirmations.rows),
+    votes: sortedIds(moved.votes.rows),
+  };
+}
+
 /**
  * What a merge and its undo do to two cases, inside one transaction that holds both case rows locked.
  * Rows change case by UPDATE, so they keep their ids, authors and dates, and an undo can move back
@@ -498,15 +521,7 @@ function mergeStore(tx: Tx) {
           AND user_id NOT IN (SELECT user_id FROM case_votes WHERE case_id = ${intoId})
         RETURNING id`);
       return {
-        moved: {
-          nets: sortedIds(nets.rows),
-          components: sortedIds(components.rows),
-          readings: readings.rows.map((r) => ({ id: r.id, position: r.position })).sort((a, b) => a.position - b.position),
-          attachments: sortedIds(attachments.rows),
-          comments: sortedIds(comments.rows),
-          confirmations: sortedIds(confirmations.rows),
-          votes: sortedIds(votes.rows),
-        },
+        moved: movedRows({ nets, components, readings, attachments, comments, confirmations, votes }),
         culpritMarked: sortedIds(marked.rows),
       };
     },
@@ -553,15 +568,7 @@ function mergeStore(tx: Tx) {
         WHERE id = ANY(${ids(culpritMarked)}) AND case_id = ${intoId} AND culprit
         RETURNING id`);
       return {
-        back: {
-          nets: sortedIds(nets.rows),
-          components: sortedIds(components.rows),
-          readings: readings.rows.map((r) => ({ id: r.id, position: r.position })).sort((a, b) => a.position - b.position),
-          attachments: sortedIds(attachments.rows),
-          comments: sortedIds(comments.rows),
-          confirmations: sortedIds(confirmations.rows),
-          votes: sortedIds(votes.rows),
-        },
+        back: movedRows({ nets, components, readings, attachments, comments, confirmations, votes }),
         culpritCleared: sortedIds(cleared.rows),
       };
     },

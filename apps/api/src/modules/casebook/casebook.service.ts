@@ -28,6 +28,7 @@ import type { BoardsRepository } from '../boards/boards.repository';
 import type {
   CaseFields,
   CaseLinks,
+  CaseMergeStore,
   CaseModerationChange,
   CaseRecord,
   CaseScorer,
@@ -45,6 +46,18 @@ const scorer: CaseScorer = (votes, confirmedBy) => {
   const evidence = caseEvidence(votes, confirmedBy);
   return { ups: evidence.ups, downs: evidence.downs, confirmations: evidence.confirmations, rankScore: caseRankScore(evidence) };
 };
+
+/**
+ * After rows moved between a duplicate and the case it was merged into (either way): both cases' counts,
+ * rank and search text from what each now holds; the kept case's links, for its revision.
+ */
+async function refreshBoth(store: CaseMergeStore, fromId: number, intoId: number) {
+  const fromLinks = await store.linksOf(fromId);
+  const intoLinks = await store.linksOf(intoId);
+  await store.refresh(fromId, searchTextOf(fromLinks.nets, fromLinks.components), scorer);
+  await store.refresh(intoId, searchTextOf(intoLinks.nets, intoLinks.components), scorer);
+  return intoLinks;
+}
 
 /** The fields and links a revision records (a merge's revision carries the duplicate's besides). */
 type SnapshotField = Exclude<keyof CaseRevisionSnapshot, 'merged'>;
@@ -663,11 +676,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
         const { moved, culpritMarked } = await store.moveToKept(fromId, intoId, into.authorId);
         const keptOnDuplicate = await store.linkedRowCounts(fromId);
         await store.setMergedInto(fromId, intoId);
-        const fromLinks = await store.linksOf(fromId);
-        const intoLinks = await store.linksOf(intoId);
-        await store.refresh(fromId, searchTextOf(fromLinks.nets, fromLinks.components), scorer);
-        await store.refresh(intoId, searchTextOf(intoLinks.nets, intoLinks.components), scorer);
-        const intoAfter = snapshotOf(fieldsOf(into), intoLinks);
+        const intoAfter = snapshotOf(fieldsOf(into), await refreshBoth(store, fromId, intoId));
         const revisionId = await store.insertRevision(intoId, {
           editorId: moderator.id,
           snapshot: { ...intoAfter, merged: { caseId: fromId, snapshot: fromBefore } },
@@ -744,11 +753,7 @@ export function createCasebookService(deps: { boards: BoardsRepository; cases: C
         const intoBefore = snapshotOf(fieldsOf(into), await store.linksOf(intoId));
         const { back, culpritCleared } = await store.moveBack(fromId, intoId, merge.moved, merge.culpritMarked);
         await store.setMergedInto(fromId, null);
-        const fromLinks = await store.linksOf(fromId);
-        const intoLinks = await store.linksOf(intoId);
-        await store.refresh(fromId, searchTextOf(fromLinks.nets, fromLinks.components), scorer);
-        await store.refresh(intoId, searchTextOf(intoLinks.nets, intoLinks.components), scorer);
-        const intoAfter = snapshotOf(fieldsOf(into), intoLinks);
+        const intoAfter = snapshotOf(fieldsOf(into), await refreshBoth(store, fromId, intoId));
         const revisionId = await store.insertRevision(intoId, {
           editorId: admin.id,
           snapshot: intoAfter,

@@ -3,6 +3,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Suspense } from 'react';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { PageHeader } from '../../components/layout/page-header';
+import { SectionLoading } from '../../components/layout/section-loading';
 import { adminUsersQueryOptions } from '../../features/admin/api/get-admin-users';
 import { auditLogQueryOptions } from '../../features/admin/api/get-audit-log';
 import { AuditLog } from '../../features/admin/components/audit-log';
@@ -22,14 +23,6 @@ export const clientLoader = (queryClient: QueryClient) => async () => {
   }
   return null;
 };
-
-function SectionLoading({ label }: { label: string }) {
-  return (
-    <div aria-busy="true" className="h-40 animate-pulse rounded-lg border border-line bg-surface">
-      <span className="sr-only">{label}</span>
-    </div>
-  );
-}
 
 export default function AdminRoute() {
   const user = useSignedInUser();

@@ -4,6 +4,7 @@ import { Suspense } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { PageHeader } from '../../components/layout/page-header';
+import { SectionLoading } from '../../components/layout/section-loading';
 import { meQueryOptions } from '../../features/auth/api/get-me';
 import { RoleGate } from '../../features/auth/components/role-gate';
 import { flagsQueryOptions } from '../../features/moderation/api/get-flags';
@@ -37,16 +38,7 @@ export default function ModerationRoute() {
       <RoleGate needed="moderator" action="The moderation queue">
         <FlagQueueTabs status={status} />
         <SectionErrorBoundary title="Could not list the reports" resetKeys={[status]}>
-          <Suspense
-            fallback={
-              <div
-                aria-busy="true"
-                className="h-40 animate-pulse rounded-lg border border-line bg-surface"
-              >
-                <span className="sr-only">Loading the reports…</span>
-              </div>
-            }
-          >
+          <Suspense fallback={<SectionLoading label="Loading the reports…" />}>
             <FlagQueue status={status} />
           </Suspense>
         </SectionErrorBoundary>

@@ -3,7 +3,7 @@
 // client does not follow fails here.
 import type { AuditEntry } from '@railyard/shared';
 import { describe, expect, it } from 'vitest';
-import { auditValueText, describeAuditEntry, rowCountsText } from './audit-entry-text';
+import { auditValueText, describeAuditEntry } from './audit-entry-text';
 
 function entry(action: string, targetType: string, targetId: string, details: object): AuditEntry {
   return {
@@ -255,11 +255,5 @@ describe('casebook moderation in the audit log', () => {
         ['reported by', 'tamsin-reyl'],
       ],
     });
-  });
-
-  it('counts rows from counts or from lists of ids, and says nothing when there are none', () => {
-    expect(rowCountsText({ comments: [1, 2], attachments: 1 })).toBe('2 comments, 1 photo or file');
-    expect(rowCountsText(noRows)).toBe('nothing');
-    expect(rowCountsText(null)).toBe('nothing');
   });
 });

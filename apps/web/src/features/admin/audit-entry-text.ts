@@ -3,6 +3,7 @@
 // casebook.service.ts); an action this client does not know yet is still shown, with its details as
 // they came.
 import type { AuditEntry } from '@railyard/shared';
+import { mergedRowsText } from '../../lib/merged-rows';
 
 export type AuditLine = {
   /** the verb phrase, e.g. "changed the role of" */
@@ -34,30 +35,6 @@ function record(value: unknown): Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value)
     ? (value as Record<string, unknown>)
     : {};
-}
-
-const countWords: Record<string, [one: string, many: string]> = {
-  nets: ['net link', 'net links'],
-  components: ['part link', 'part links'],
-  readings: ['reading', 'readings'],
-  attachments: ['photo or file', 'photos and files'],
-  comments: ['comment', 'comments'],
-  confirmations: ['confirmation', 'confirmations'],
-  votes: ['vote', 'votes'],
-};
-
-/**
- * Rows of each kind a merge moved, as "3 readings, 1 comment": from counts, or from the lists of row
- * ids the merge entry records. Kinds with none are left out; "nothing" when all are.
- */
-export function rowCountsText(value: unknown): string {
-  const parts = Object.entries(record(value)).flatMap(([kind, rows]) => {
-    const count = Array.isArray(rows) ? rows.length : typeof rows === 'number' ? rows : 0;
-    if (count === 0) return [];
-    const [one, many] = countWords[kind] ?? [kind, kind];
-    return [`${count.toLocaleString('en')} ${count === 1 ? one : many}`];
-  });
-  return parts.length === 0 ? 'nothing' : parts.join(', ');
 }
 
 /** "#12 “No boot after a drop”", or "#12" when the entry kept no title. */
@@ -155,14 +132,14 @@ export function describeAuditEntry(
         ],
       };
     case 'case.merge': {
-      const leftBehind = rowCountsText(details.keptOnDuplicate);
+      const leftBehind = mergedRowsText(details.keptOnDuplicate);
       const culprits = Array.isArray(details.culpritMarked) ? details.culpritMarked.length : 0;
       return {
         what: 'merged the case',
         target: caseLabel(entry.targetId, details.fromTitle),
         details: [
           ['into', caseLabel(details.intoCaseId, details.intoTitle)],
-          ['moved', rowCountsText(details.moved)],
+          ['moved', mergedRowsText(details.moved)],
           ...detailIf(leftBehind !== 'nothing', 'left on the duplicate', leftBehind),
           ...detailIf(culprits > 0, 'culprits marked', String(culprits)),
           ...board,
@@ -181,7 +158,7 @@ export function describeAuditEntry(
       };
     }
     case 'case.unmerge': {
-      const skipped = rowCountsText(details.skipped);
+      const skipped = mergedRowsText(details.skipped);
       const cleared =
         typeof details.culpritMarksCleared === 'number' ? details.culpritMarksCleared : 0;
       return {
@@ -190,7 +167,7 @@ export function describeAuditEntry(
         details: [
           ['undoes', `entry #${auditValueText(details.undoes)}`],
           ['kept case', `#${auditValueText(details.intoCaseId)}`],
-          ['moved back', rowCountsText(details.movedBack)],
+          ['moved back', mergedRowsText(details.movedBack)],
           ...detailIf(skipped !== 'nothing', 'no longer there', skipped),
           ...detailIf(cleared > 0, 'culprit marks cleared', String(cleared)),
           ...remaining(details, [

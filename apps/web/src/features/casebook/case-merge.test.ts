@@ -3,7 +3,6 @@ import { describe, expect, it } from 'vitest';
 import {
   caseNumberIn,
   mergeCandidates,
-  mergeCountsText,
   mergedNoticeOf,
   mergedRedirectHref,
   mergeOutcomeFrom,
@@ -74,21 +73,6 @@ const none: CaseMergeCounts = {
   confirmations: 0,
   votes: 0,
 };
-
-describe('what a merge moved, in words', () => {
-  it('lists the kinds that moved, one or many, and skips the rest', () => {
-    expect(mergeCountsText({ ...none, readings: 3, comments: 1, votes: 2 })).toBe(
-      '3 readings, 1 comment, 2 votes',
-    );
-    expect(mergeCountsText({ ...none, attachments: 1, nets: 2 })).toBe(
-      '2 net links, 1 photo or file',
-    );
-  });
-
-  it('says nothing moved when every count is zero', () => {
-    expect(mergeCountsText(none)).toBe('nothing');
-  });
-});
 
 describe('the merge handed to the kept case’s page', () => {
   const summary = {

@@ -3,6 +3,7 @@
 // says where the reader came from. The merge dialog picks the kept case among the board's cases.
 import type { CaseDetail, CaseMergeCounts, CaseMergeSummary, CaseSummary } from '@railyard/shared';
 import { paths } from '../../config/paths';
+import { mergedRowKinds } from '../../lib/merged-rows';
 
 /** The search parameter that carries the duplicate's id to the kept case's page. */
 const mergedFromParam = 'mergedFrom';
@@ -67,27 +68,6 @@ export function mergeCandidates<T extends Pick<CaseSummary, 'id' | 'board'>>(
   return candidates;
 }
 
-const countWords: Record<keyof CaseMergeCounts, [one: string, many: string]> = {
-  nets: ['net link', 'net links'],
-  components: ['part link', 'part links'],
-  readings: ['reading', 'readings'],
-  attachments: ['photo or file', 'photos and files'],
-  comments: ['comment', 'comments'],
-  confirmations: ['confirmation', 'confirmations'],
-  votes: ['vote', 'votes'],
-};
-
-/** "3 readings, 1 comment, 2 votes": the kinds that have any, in the order the counts list them. */
-export function mergeCountsText(counts: CaseMergeCounts): string {
-  const parts = (Object.keys(countWords) as Array<keyof CaseMergeCounts>)
-    .filter((kind) => counts[kind] > 0)
-    .map((kind) => {
-      const [one, many] = countWords[kind];
-      return `${counts[kind].toLocaleString('en')} ${counts[kind] === 1 ? one : many}`;
-    });
-  return parts.length === 0 ? 'nothing' : parts.join(', ');
-}
-
 /** What the merge dialog hands to the kept case's page, in the history entry's state. */
 export type MergeOutcome = { summary: CaseMergeSummary; fromTitle: string };
 
@@ -98,9 +78,7 @@ export function mergeOutcomeState(outcome: MergeOutcome): { merged: MergeOutcome
 const isCounts = (value: unknown): value is CaseMergeCounts =>
   typeof value === 'object' &&
   value !== null &&
-  Object.keys(countWords).every(
-    (kind) => typeof (value as Record<string, unknown>)[kind] === 'number',
-  );
+  mergedRowKinds.every((kind) => typeof (value as Record<string, unknown>)[kind] === 'number');
 
 /**
  * The merge just done into `shownId`, from the history entry's state; null for any other entry

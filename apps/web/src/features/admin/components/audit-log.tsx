@@ -4,11 +4,8 @@ import type { AuditEntry } from '@railyard/shared';
 import { useMemo, useState } from 'react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
-import { ReasonField } from '../../../components/ui/reason-field';
-import { isApiError } from '../../../lib/api-client';
+import { ReasonDialog } from '../../../components/ui/reason-dialog';
 import { formatDateTime } from '../../../lib/date-format';
-import { reasonProblem } from '../../../lib/edit-reason';
 import { formatCount } from '../../../lib/quantity-format';
 import { useAdminUsers } from '../api/get-admin-users';
 import { useAuditLog } from '../api/get-audit-log';
@@ -18,43 +15,36 @@ import { describeAuditEntry } from '../audit-entry-text';
 const headClass = 'px-3 py-2 text-left text-xs font-medium text-ink-muted whitespace-nowrap';
 const cellClass = 'px-3 py-1.5 align-top';
 
-function UndoMergeForm({ entry, onDone }: { entry: AuditEntry; onDone: () => void }) {
-  const [reason, setReason] = useState('');
-  const [problem, setProblem] = useState<string | undefined>();
+function UndoMergeDialog({
+  entry,
+  open,
+  onClose,
+}: {
+  entry: AuditEntry;
+  open: boolean;
+  onClose: () => void;
+}) {
   const undo = useUndoAuditEntry();
-  const fromApi = isApiError(undo.error) ? undo.error.fieldErrors.reason : undefined;
+  const close = () => {
+    undo.reset();
+    onClose();
+  };
   return (
-    <form
-      noValidate
-      className="space-y-3"
-      onSubmit={(event) => {
-        event.preventDefault();
-        const found = reasonProblem(reason);
-        setProblem(found);
-        if (!found) undo.mutate({ id: entry.id, reason: reason.trim() }, { onSuccess: onDone });
-      }}
-    >
-      <ReasonField
-        autoFocus
-        label="Why you undo it"
-        value={reason}
-        onChange={(value) => {
-          setReason(value);
-          if (problem) setProblem(undefined);
-        }}
-        error={problem ?? fromApi}
-        placeholder="e.g. the two cases are different faults on the same rail"
-      />
-      {undo.isError && !fromApi && <ErrorPanel compact error={undo.error} title="Not undone" />}
-      <div className="flex justify-end gap-2">
-        <Button size="sm" variant="ghost" onClick={onDone}>
-          Cancel
-        </Button>
-        <Button type="submit" size="sm" variant="danger" disabled={undo.isPending}>
-          {undo.isPending ? 'Undoing…' : 'Undo the merge'}
-        </Button>
-      </div>
-    </form>
+    <ReasonDialog
+      open={open}
+      onClose={close}
+      title={`Undo the merge of case #${entry.targetId}?`}
+      description="The duplicate becomes a case of its own again: the links, readings, files, comments, votes and confirmations the merge moved go back to it, and its address stops leading to the kept case. Rows removed from the kept case since are not brought back."
+      reasonLabel="Why you undo it"
+      placeholder="e.g. the two cases are different faults on the same rail"
+      confirmLabel="Undo the merge"
+      pendingLabel="Undoing…"
+      failedTitle="Not undone"
+      tone="danger"
+      pending={undo.isPending}
+      error={undo.error}
+      onConfirm={(reason) => undo.mutate({ id: entry.id, reason }, { onSuccess: close })}
+    />
   );
 }
 
@@ -85,14 +75,7 @@ function MergeUndo({ entry }: { entry: AuditEntry }) {
       <Button size="sm" className="mt-1 h-6 px-2 text-xs" onClick={() => setOpen(true)}>
         Undo merge
       </Button>
-      <Dialog
-        open={open}
-        onClose={() => setOpen(false)}
-        title={`Undo the merge of case #${entry.targetId}?`}
-        description="The duplicate becomes a case of its own again: the links, readings, files, comments, votes and confirmations the merge moved go back to it, and its address stops leading to the kept case. Rows removed from the kept case since are not brought back."
-      >
-        <UndoMergeForm entry={entry} onDone={() => setOpen(false)} />
-      </Dialog>
+      <UndoMergeDialog entry={entry} open={open} onClose={() => setOpen(false)} />
     </>
   );
 }

@@ -1,8 +1,7 @@
 // The top of a part's page: what the part is, where it sits, and what the casebook says about it.
 import type { ComponentDetail, ComponentKind } from '@railyard/shared';
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
-import { paths } from '../../../config/paths';
+import { BoardItemHeader } from '../../../components/layout/board-item-header';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
 
 export function ComponentKindBadge({ kind }: { kind: ComponentKind }) {
@@ -59,50 +58,32 @@ export function ComponentHeader({ board, detail, actions }: ComponentHeaderProps
     component.ratedVoltage === null ? '' : `rated ${formatVolts(component.ratedVoltage)}`,
   ].filter((fact) => fact !== '');
   return (
-    <section
-      aria-labelledby="component-title"
-      className="border-b border-line bg-surface px-4 py-3"
-    >
-      <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-        <div className="min-w-0 flex-1">
-          <p className="text-[13px] text-ink-muted">
-            <Link
-              to={paths.board.getHref(board.slug)}
-              className="hover:text-accent hover:underline"
-            >
-              {board.title}
-            </Link>
-            <span className="mx-1.5 text-ink-faint" aria-hidden="true">
-              /
+    <BoardItemHeader
+      titleId="component-title"
+      board={board}
+      kind="part"
+      name={component.refdes}
+      aside={actions}
+      facts={
+        <>
+          <ComponentKindBadge kind={component.kind} />
+          {component.value ? (
+            <span className="font-mono text-ink" title="Value as written in the parts list">
+              {component.value}
             </span>
-            part
-          </p>
-          <h1
-            id="component-title"
-            className="mt-0.5 font-mono text-xl leading-tight font-semibold break-all"
-          >
-            {component.refdes}
-          </h1>
-          <div className="mt-1.5 flex flex-wrap items-center gap-x-3 gap-y-1 text-[13px] text-ink-muted">
-            <ComponentKindBadge kind={component.kind} />
-            {component.value ? (
-              <span className="font-mono text-ink" title="Value as written in the parts list">
-                {component.value}
-              </span>
-            ) : (
-              <span className="text-ink-faint">no value given</span>
-            )}
-            {facts.map((fact) => (
-              <span key={fact}>{fact}</span>
-            ))}
-            <span>{plural(component.pins.length, 'pin', 'pins')}</span>
-          </div>
-          <div className="mt-1.5 empty:hidden">
-            <CulpritTallyLine casebook={detail.casebook} />
-          </div>
-        </div>
-        {actions}
+          ) : (
+            <span className="text-ink-faint">no value given</span>
+          )}
+          {facts.map((fact) => (
+            <span key={fact}>{fact}</span>
+          ))}
+          <span>{plural(component.pins.length, 'pin', 'pins')}</span>
+        </>
+      }
+    >
+      <div className="mt-1.5 empty:hidden">
+        <CulpritTallyLine casebook={detail.casebook} />
       </div>
-    </section>
+    </BoardItemHeader>
   );
 }

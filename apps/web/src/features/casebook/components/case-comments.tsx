@@ -10,6 +10,7 @@ import { Avatar } from '../../../components/ui/avatar';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { Field, TextArea } from '../../../components/ui/field';
+import { ReasonDialog } from '../../../components/ui/reason-dialog';
 import { ReasonField } from '../../../components/ui/reason-field';
 import { paths } from '../../../config/paths';
 import { isApiError } from '../../../lib/api-client';
@@ -25,7 +26,6 @@ import { useUpdateComment } from '../api/update-comment';
 import { commentMaxLength } from '../case-vocabulary';
 import { CaseHtml } from './case-html';
 import { PersonName } from './case-marks';
-import { ModerationReasonDialog } from './moderation-reason-dialog';
 import { ReportButton } from './report-button';
 
 const markdownHint = 'Markdown. Net names and part designators of this board become links.';
@@ -191,7 +191,7 @@ function HideCommentDialog({
     onClose();
   };
   return (
-    <ModerationReasonDialog
+    <ReasonDialog
       open={open}
       onClose={close}
       title={restoring ? 'Restore this comment?' : 'Hide this comment?'}

@@ -3,10 +3,10 @@
 import type { CaseDetail } from '@railyard/shared';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
+import { ReasonDialog } from '../../../components/ui/reason-dialog';
 import { formatDateTime } from '../../../lib/date-format';
 import { useModerateCase, type CaseModerationAction } from '../api/moderate-case';
 import { MergeCaseDialog } from './merge-case-dialog';
-import { ModerationReasonDialog } from './moderation-reason-dialog';
 
 export function CaseStateBanners({ detail }: { detail: CaseDetail }) {
   const state = detail.moderation;
@@ -133,7 +133,7 @@ export function CaseModeratorPanel({ detail }: { detail: CaseDetail }) {
           </Button>
         )}
       </div>
-      <ModerationReasonDialog
+      <ReasonDialog
         open={action !== null}
         onClose={close}
         title={actionText[shown].title}

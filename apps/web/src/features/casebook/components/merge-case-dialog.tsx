@@ -6,14 +6,11 @@ import type { CaseDetail, CaseSummary } from '@railyard/shared';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { Field, TextInput } from '../../../components/ui/field';
-import { ReasonField } from '../../../components/ui/reason-field';
+import { ReasonForm } from '../../../components/ui/reason-dialog';
 import { paths } from '../../../config/paths';
-import { isApiError } from '../../../lib/api-client';
-import { reasonProblem } from '../../../lib/edit-reason';
 import { formatCount } from '../../../lib/quantity-format';
 import { boardCasesQueryOptions } from '../api/get-board-cases';
 import { caseQueryOptions } from '../api/get-case';
@@ -196,10 +193,8 @@ function MergeConsequences({ detail, kept }: { detail: CaseDetail; kept: Candida
 function MergeForm({ detail, onCancel }: { detail: CaseDetail; onCancel: () => void }) {
   const [kept, setKept] = useState<Candidate | null>(null);
   const [reason, setReason] = useState('');
-  const [problem, setProblem] = useState<string | undefined>();
   const merge = useMergeCase(detail.board.slug, detail.id);
   const navigate = useNavigate();
-  const fromApi = isApiError(merge.error) ? merge.error.fieldErrors : {};
 
   if (!kept) {
     return (
@@ -215,16 +210,21 @@ function MergeForm({ detail, onCancel }: { detail: CaseDetail; onCancel: () => v
   }
 
   return (
-    <form
-      noValidate
-      className="space-y-3"
-      onSubmit={(event) => {
-        event.preventDefault();
-        const found = reasonProblem(reason);
-        setProblem(found);
-        if (found) return;
+    <ReasonForm
+      reasonLabel="Why you merge them"
+      placeholder="e.g. same shorted capacitor on VSYS, written up twice"
+      confirmLabel={`Merge into #${kept.id}`}
+      pendingLabel="Merging…"
+      failedTitle="Not merged"
+      tone="danger"
+      pending={merge.isPending}
+      error={merge.error}
+      reason={reason}
+      onReasonChange={setReason}
+      onCancel={onCancel}
+      onConfirm={(trimmed) =>
         merge.mutate(
-          { intoCaseId: kept.id, reason: reason.trim() },
+          { intoCaseId: kept.id, reason: trimmed },
           {
             onSuccess: (result) =>
               void navigate(paths.case.getHref(result.case.id), {
@@ -232,8 +232,8 @@ function MergeForm({ detail, onCancel }: { detail: CaseDetail; onCancel: () => v
                 state: mergeOutcomeState({ summary: result.merge, fromTitle: detail.title }),
               }),
           },
-        );
-      }}
+        )
+      }
     >
       <div className="rounded-md border border-line px-2.5 py-2 text-[13px]">
         <div className="flex items-baseline justify-between gap-2">
@@ -254,28 +254,6 @@ function MergeForm({ detail, onCancel }: { detail: CaseDetail; onCancel: () => v
         <CandidateLine found={kept} />
       </div>
       <MergeConsequences detail={detail} kept={kept} />
-      <ReasonField
-        autoFocus
-        label="Why you merge them"
-        value={reason}
-        onChange={(value) => {
-          setReason(value);
-          if (problem) setProblem(undefined);
-        }}
-        error={problem ?? fromApi.reason}
-        placeholder="e.g. same shorted capacitor on VSYS, written up twice"
-      />
-      {merge.isError && !fromApi.reason && (
-        <ErrorPanel compact error={merge.error} title="Not merged" />
-      )}
-      <div className="flex justify-end gap-2">
-        <Button size="sm" variant="ghost" onClick={onCancel}>
-          Cancel
-        </Button>
-        <Button type="submit" size="sm" variant="danger" disabled={merge.isPending}>
-          {merge.isPending ? 'Merging…' : `Merge into #${kept.id}`}
-        </Button>
-      </div>
-    </form>
+    </ReasonForm>
   );
 }

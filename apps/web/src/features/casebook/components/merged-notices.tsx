@@ -6,8 +6,8 @@ import { useState } from 'react';
 import { Link, useLocation, useSearchParams } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
+import { mergedRowsText } from '../../../lib/merged-rows';
 import {
-  mergeCountsText,
   mergedNoticeOf,
   mergeOutcomeFrom,
   type MergedNotice,
@@ -16,7 +16,7 @@ import {
 
 function JustMerged({ outcome, onDismiss }: { outcome: MergeOutcome; onDismiss: () => void }) {
   const { summary } = outcome;
-  const leftBehind = mergeCountsText(summary.keptOnDuplicate);
+  const leftBehind = mergedRowsText(summary.keptOnDuplicate);
   return (
     <div
       role="status"
@@ -25,7 +25,7 @@ function JustMerged({ outcome, onDismiss }: { outcome: MergeOutcome; onDismiss: 
       <div className="min-w-0 flex-1">
         <p>
           Merged case <span className="font-mono">#{summary.fromCaseId}</span> “{outcome.fromTitle}”
-          into this one. Moved here: {mergeCountsText(summary.moved)}.
+          into this one. Moved here: {mergedRowsText(summary.moved)}.
         </p>
         {leftBehind !== 'nothing' && (
           <p className="mt-0.5 text-ink-muted">

@@ -1,12 +1,9 @@
 // "Report": a signed-in member tells the moderators that a case or a comment needs a look (spam,
 // a dangerous instruction, someone's phone number). The moderators read the reason in their queue.
 import { useState, type ReactNode } from 'react';
-import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
-import { Field, TextArea } from '../../../components/ui/field';
-import { isApiError } from '../../../lib/api-client';
-import { reasonMaxLength, reasonProblem } from '../../../lib/edit-reason';
+import { ReasonForm } from '../../../components/ui/reason-dialog';
 import { isAlreadyFlagged, useFlagContent, type FlagTarget } from '../api/flag-content';
 
 type ReportButtonProps = { target: FlagTarget; className?: string };
@@ -44,11 +41,18 @@ export function ReportButton({ target, className }: ReportButtonProps) {
             You reported this {target.type} already; moderators will look at it.
           </Outcome>
         ) : (
-          <ReportForm
+          <ReasonForm
+            reasonLabel="What is wrong with it"
+            rows={3}
+            audited={false}
+            placeholder="e.g. advertises a repair shop; the same text is on three boards"
+            confirmLabel="Report to the moderators"
+            pendingLabel="Sending…"
+            failedTitle="Not reported"
             pending={flag.isPending}
             error={flag.error}
             onCancel={() => setOpen(false)}
-            onSubmit={(reason) => flag.mutate(reason)}
+            onConfirm={(reason) => flag.mutate(reason)}
           />
         )}
       </Dialog>
@@ -68,59 +72,5 @@ function Outcome({ children, onClose }: { children: ReactNode; onClose: () => vo
         </Button>
       </div>
     </div>
-  );
-}
-
-function ReportForm({
-  pending,
-  error,
-  onCancel,
-  onSubmit,
-}: {
-  pending: boolean;
-  error: unknown;
-  onCancel: () => void;
-  onSubmit: (reason: string) => void;
-}) {
-  const [reason, setReason] = useState('');
-  const [problem, setProblem] = useState<string | undefined>();
-  const fromApi = isApiError(error) ? error.fieldErrors.reason : undefined;
-  return (
-    <form
-      noValidate
-      className="space-y-3"
-      onSubmit={(event) => {
-        event.preventDefault();
-        const found = reasonProblem(reason);
-        setProblem(found);
-        if (!found) onSubmit(reason.trim());
-      }}
-    >
-      <Field label="What is wrong with it" error={problem ?? fromApi}>
-        {(control) => (
-          <TextArea
-            {...control}
-            rows={3}
-            autoFocus
-            maxLength={reasonMaxLength}
-            value={reason}
-            placeholder="e.g. advertises a repair shop; the same text is on three boards"
-            onChange={(event) => {
-              setReason(event.target.value);
-              if (problem) setProblem(undefined);
-            }}
-          />
-        )}
-      </Field>
-      {error != null && !fromApi && <ErrorPanel compact error={error} title="Not reported" />}
-      <div className="flex justify-end gap-2">
-        <Button size="sm" variant="ghost" onClick={onCancel}>
-          Cancel
-        </Button>
-        <Button type="submit" size="sm" variant="primary" disabled={pending}>
-          {pending ? 'Sending…' : 'Report to the moderators'}
-        </Button>
-      </div>
-    </form>
   );
 }

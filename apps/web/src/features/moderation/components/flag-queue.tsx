@@ -4,13 +4,9 @@
 import type { CaseFlag } from '@railyard/shared';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
-import { ReasonField } from '../../../components/ui/reason-field';
-import { isApiError } from '../../../lib/api-client';
+import { ReasonDialog } from '../../../components/ui/reason-dialog';
 import { formatDateTime } from '../../../lib/date-format';
-import { reasonProblem } from '../../../lib/edit-reason';
 import { formatCount } from '../../../lib/quantity-format';
 import { useFlags } from '../api/get-flags';
 import { useResolveFlag } from '../api/resolve-flag';
@@ -72,70 +68,21 @@ function ResolveFlagDialog({ flag, onClose }: { flag: CaseFlag | null; onClose: 
     onClose();
   };
   return (
-    <Dialog
+    <ReasonDialog
       open={flag !== null}
       onClose={close}
       title={flag ? `Resolve the report of ${flaggedContentLabel(flag).toLowerCase()}` : ''}
       description="Say what you did about it, or why nothing needed doing. The audit log keeps it; the report moves to the resolved list."
-    >
-      {flag && (
-        <ResolveForm
-          pending={resolve.isPending}
-          error={resolve.error}
-          onCancel={close}
-          onResolve={(reason) => resolve.mutate({ id: flag.id, reason }, { onSuccess: close })}
-        />
-      )}
-    </Dialog>
-  );
-}
-
-function ResolveForm({
-  pending,
-  error,
-  onCancel,
-  onResolve,
-}: {
-  pending: boolean;
-  error: unknown;
-  onCancel: () => void;
-  onResolve: (reason: string) => void;
-}) {
-  const [reason, setReason] = useState('');
-  const [problem, setProblem] = useState<string | undefined>();
-  const fromApi = isApiError(error) ? error.fieldErrors.reason : undefined;
-  return (
-    <form
-      noValidate
-      className="space-y-3"
-      onSubmit={(event) => {
-        event.preventDefault();
-        const found = reasonProblem(reason);
-        setProblem(found);
-        if (!found) onResolve(reason.trim());
+      reasonLabel="What you did"
+      placeholder="e.g. hid the comment; or: the fix is unusual but correct"
+      confirmLabel="Resolve the report"
+      failedTitle="Not resolved"
+      pending={resolve.isPending}
+      error={resolve.error}
+      onConfirm={(reason) => {
+        if (flag) resolve.mutate({ id: flag.id, reason }, { onSuccess: close });
       }}
-    >
-      <ReasonField
-        autoFocus
-        label="What you did"
-        value={reason}
-        onChange={(value) => {
-          setReason(value);
-          if (problem) setProblem(undefined);
-        }}
-        error={problem ?? fromApi}
-        placeholder="e.g. hid the comment; or: the fix is unusual but correct"
-      />
-      {error != null && !fromApi && <ErrorPanel compact error={error} title="Not resolved" />}
-      <div className="flex justify-end gap-2">
-        <Button size="sm" variant="ghost" onClick={onCancel}>
-          Cancel
-        </Button>
-        <Button type="submit" size="sm" variant="primary" disabled={pending}>
-          {pending ? 'Saving…' : 'Resolve the report'}
-        </Button>
-      </div>
-    </form>
+    />
   );
 }
 
