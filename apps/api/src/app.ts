@@ -167,7 +167,9 @@ export function createApp({ env, pool, logger }: AppDeps) {
   const publicOrigin = env.PUBLIC_URL ? new URL(env.PUBLIC_URL).origin : null;
   const api = express.Router();
   api.use(csrfGuard({ isAllowedOrigin: (origin, req) => origin === (publicOrigin ?? requestOrigin(req)) }));
-  api.use(express.json({ limit: '1mb' }));
+  // reads carry no body: they skip the JSON parser
+  const jsonBody = express.json({ limit: '1mb' });
+  api.use((req, res, next) => (req.method === 'GET' || req.method === 'HEAD' ? next() : jsonBody(req, res, next)));
   // liveness: the process answers, without touching the database
   api.get('/health/live', (_req, res) => {
     res.json({ status: 'ok' });
@@ -177,10 +179,11 @@ export function createApp({ env, pool, logger }: AppDeps) {
     await pool.query('SELECT 1');
     res.json({ status: 'ok' });
   });
+  // the most read routes first: every router before a route is walked for each request
+  api.use(powerTreeRouter(services.powerTree));
   api.use(sessionApiRouter({ cookieName: sessionCookieName(env) }));
   api.use(boardsRouter(services.boards));
   api.use(importsRouter(services.imports, { maxBytes: env.IMPORT_MAX_BYTES, uploadLimit: limits.uploads }));
-  api.use(powerTreeRouter(services.powerTree));
   api.use(searchRouter(services.search));
   api.use(boardEditsRouter(services.boardEdits, limits.writes));
   api.use(casebookRouter(services.casebook, limits.writes));

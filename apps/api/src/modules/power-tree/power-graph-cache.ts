@@ -27,9 +27,12 @@ export interface CachedBoard {
   traceJson(key: string, serialise: () => string): TraceJson;
 }
 
-/** A trace as sent: the JSON text and its entity tag, hashed once instead of on every response. */
+/**
+ * A trace as sent: the JSON as UTF-8 bytes and its entity tag, encoded and hashed once instead of on
+ * every response.
+ */
 export interface TraceJson {
-  text: string;
+  bytes: Buffer;
   etag: string;
 }
 
@@ -49,7 +52,7 @@ function cachedBoard(id: number, graph: PowerGraph, rootNet: string | null): Cac
       const held = traces.get(key);
       if (held !== undefined) return held;
       const text = serialise();
-      const trace = { text, etag: weakEtag(text) };
+      const trace = { bytes: Buffer.from(text, 'utf8'), etag: weakEtag(text) };
       if (traces.size >= tracesKeptPerBoard) traces.delete(traces.keys().next().value as string);
       traces.set(key, trace);
       return trace;

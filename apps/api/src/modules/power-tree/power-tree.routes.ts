@@ -8,7 +8,7 @@ const netNameSchema = z.string().min(1).max(200);
 
 /** With the tag already set, Express skips hashing the body but still answers 304 to a matching If-None-Match. */
 function sendTrace(res: Response, trace: TraceJson) {
-  res.set('ETag', trace.etag).type('json').send(trace.text);
+  res.set('ETag', trace.etag).type('json').send(trace.bytes);
 }
 
 export function powerTreeRouter(service: PowerTreeService): Router {

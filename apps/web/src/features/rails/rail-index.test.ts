@@ -121,7 +121,8 @@ describe('rail index', () => {
       many.push(net(`${parts.join('_')}_${i}`, random() < 0.3 ? 'signal' : 'power'));
     }
     const bigIndex = buildRailIndex(many);
-    for (const typed of ['vcc3v3', 'vsys', 'vdd1v9', 'usbcpu', 'audo', 'mem12']) {
+    // 1 or 3 characters take the pigeonhole filter (the q-gram bound says nothing there), the rest the q-gram count
+    for (const typed of ['vcc3v3', 'vsys', 'vdd1v9', 'usbcpu', 'audo', 'mem12', 'vbat5vmem', 'usb1v8audo', 'vsys0v9lx', 'cpu12vsnss']) {
       const needle = normalizeRailText(typed);
       const budget = Math.floor(railMatchThreshold * needle.length);
       const expected = many

@@ -3,7 +3,8 @@
 // then matched by edit distance anywhere in the name (fuse.js's Bitap search with location off).
 // Most keystrokes are part of a name typed without a slip: when the folded text appears as it is in
 // enough names to fill the list, those exact hits are the answer (they rank above any fuzzy match)
-// and fuse.js is not asked, which keeps a 5,000-net board well under 5 ms a keystroke.
+// and fuse.js is not asked; otherwise it is asked only about the names a q-gram count leaves, which
+// keeps a 5,000-net board under 5 ms a keystroke.
 import type { NetKind, NetRow } from '@railyard/shared';
 import Fuse, { type IFuseOptions } from 'fuse.js/basic';
 import { naturalCompare } from '../../lib/natural-order';
@@ -72,12 +73,78 @@ function byRank(a: Candidate, b: Candidate): number {
   );
 }
 
-/** `count` consecutive pieces of `text`, as even in length as they can be. */
-function splitIntoPieces(text: string, count: number): string[] {
-  const pieces: string[] = [];
-  const size = text.length / count;
-  for (let i = 0; i < count; i++) pieces.push(text.slice(Math.round(i * size), Math.round((i + 1) * size)));
-  return pieces.filter((piece) => piece !== '');
+/** The two-character pieces of `key`, each once. */
+function bigramsOf(key: string): Set<string> {
+  const grams = new Set<string>();
+  for (let i = 0; i + 2 <= key.length; i++) grams.add(key.slice(i, i + 2));
+  return grams;
+}
+
+/**
+ * Records holding enough of the needle's two-character pieces to be within `errors` of it.
+ * The q-gram lemma (E. Ukkonen, "Approximate string-matching with q-grams and maximal matches",
+ * Theoretical Computer Science 92, 1992): text within k edits of a pattern of length m holds at least
+ * m + 1 − (k + 1)·q of the pattern's q-grams, counted by position. Null when that bound says nothing.
+ */
+function bigramCandidates(
+  needle: string,
+  errors: number,
+  postings: ReadonlyMap<string, readonly number[]>,
+  counts: Uint16Array,
+): number[] | null {
+  const needed = needle.length + 1 - (errors + 1) * 2;
+  if (needed <= 0) return null;
+  const perGram = new Map<string, number>();
+  for (let i = 0; i + 2 <= needle.length; i++) {
+    const gram = needle.slice(i, i + 2);
+    perGram.set(gram, (perGram.get(gram) ?? 0) + 1);
+  }
+  const touched: number[] = [];
+  for (const [gram, times] of perGram) {
+    for (const record of postings.get(gram) ?? []) {
+      if (counts[record] === 0) touched.push(record);
+      counts[record] = (counts[record] ?? 0) + times;
+    }
+  }
+  const passing = touched.filter((record) => (counts[record] ?? 0) >= needed);
+  for (const record of touched) counts[record] = 0;
+  return passing;
+}
+
+/**
+ * `count` consecutive pieces of `text` for the pigeonhole filter. Any cut works; the one chosen makes
+ * the pieces rare in the board's names (`howMany` estimates how many names hold a piece), since one
+ * common piece — a lone `V` — lets nearly every name through. Even pieces when there are too many
+ * cuts to weigh.
+ */
+function splitIntoPieces(text: string, count: number, howMany: (piece: string) => number): string[] {
+  const even = () => {
+    const pieces: string[] = [];
+    const size = text.length / count;
+    for (let i = 0; i < count; i++) pieces.push(text.slice(Math.round(i * size), Math.round((i + 1) * size)));
+    return pieces.filter((piece) => piece !== '');
+  };
+  if (count <= 1 || text.length > 12) return even();
+  let best: string[] = even();
+  let bestCost = best.reduce((sum, piece) => sum + howMany(piece), 0);
+  // every choice of count − 1 cut points among the text.length − 1 gaps
+  const cuts: number[] = [];
+  const visit = (from: number) => {
+    if (cuts.length === count - 1) {
+      const ends = [0, ...cuts, text.length];
+      const pieces = ends.slice(1).map((end, at) => text.slice(ends[at], end));
+      const cost = pieces.reduce((sum, piece) => sum + howMany(piece), 0);
+      if (cost < bestCost) [best, bestCost] = [pieces, cost];
+      return;
+    }
+    for (let cut = from; cut <= text.length - (count - 1 - cuts.length); cut++) {
+      cuts.push(cut);
+      visit(cut + 1);
+      cuts.pop();
+    }
+  };
+  visit(1);
+  return best;
 }
 
 export function buildRailIndex(nets: readonly NetRow[]): RailIndex {
@@ -91,6 +158,26 @@ export function buildRailIndex(nets: readonly NetRow[]): RailIndex {
     }
   }
   const fuse = new Fuse(records, fuseOptions, Fuse.createIndex(fuseOptions.keys ?? [], records));
+  // which records hold each two-character piece, for the q-gram filter
+  const postings = new Map<string, number[]>();
+  records.forEach((record, at) => {
+    for (const gram of bigramsOf(record.key)) {
+      const list = postings.get(gram);
+      if (list) list.push(at);
+      else postings.set(gram, [at]);
+    }
+  });
+  const gramCounts = new Uint16Array(records.length);
+  const charCounts = new Map<string, number>();
+  for (const record of records) {
+    for (const char of new Set(record.key)) charCounts.set(char, (charCounts.get(char) ?? 0) + 1);
+  }
+  // at most the names holding the piece's rarest character or two-character piece
+  const howMany = (piece: string) => {
+    let fewest = Math.min(...[...piece].map((char) => charCounts.get(char) ?? 0));
+    for (let i = 0; i + 2 <= piece.length; i++) fewest = Math.min(fewest, postings.get(piece.slice(i, i + 2))?.length ?? 0);
+    return fewest;
+  };
 
   return {
     size: nets.length,
@@ -106,11 +193,19 @@ export function buildRailIndex(nets: readonly NetRow[]): RailIndex {
       if (exactNets.size >= limit) {
         hits = exact.map((item) => ({ item, score: 0 }));
       } else {
-        // Pigeonhole: with k errors allowed, a match holds one of k + 1 pieces of the text unchanged.
-        // Only names holding a piece go to fuse.js, so it scores tens of names instead of thousands.
-        const pieces = splitIntoPieces(needle, Math.floor(railMatchThreshold * needle.length) + 1);
-        const candidates = records.filter((record) => pieces.some((piece) => record.key.includes(piece)));
-        hits = candidates.length === records.length ? fuse.search(needle) : new Fuse(candidates, fuseOptions).search(needle);
+        // Only names that can be within the error budget go to fuse.js, so it scores tens of names
+        // instead of thousands: those holding enough of the text's two-character pieces (q-gram
+        // lemma, when the text is long enough for that bound to say something) and one of k + 1
+        // pieces of it unchanged (pigeonhole: k errors cannot touch all k + 1).
+        const budget = Math.floor(railMatchThreshold * needle.length);
+        const byGrams = bigramCandidates(needle, budget, postings, gramCounts);
+        const pieces = splitIntoPieces(needle, budget + 1, howMany);
+        const holdsPiece = (record: RailRecord) => pieces.some((piece) => record.key.includes(piece));
+        const candidates = byGrams
+          ? byGrams.map((at) => records[at] as RailRecord).filter(holdsPiece)
+          : records.filter(holdsPiece);
+        // building a fuse.js index for most of the board costs more than searching the whole one
+        hits = candidates.length * 2 > records.length ? fuse.search(needle) : new Fuse(candidates, fuseOptions).search(needle);
       }
       const bestPerNet = new Map<string, Candidate>();
       for (const { item, score = 0 } of hits) {
