@@ -13,6 +13,7 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
+          sequence: { groupOrder: 0 },
           include: [
             'packages/**/src/**/*.test.ts',
             'apps/**/src/**/*.test.ts',
@@ -28,6 +29,7 @@ export default defineConfig({
           environment: 'node',
           // The API tests share one database; running files one at a time keeps their rows apart.
           fileParallelism: false,
+          sequence: { groupOrder: 0 },
           testTimeout: 30_000,
           globalSetup: existsSync(apiGlobalSetup) ? [apiGlobalSetup] : [],
         },
@@ -39,6 +41,9 @@ export default defineConfig({
           environment: 'node',
           // One browser and one server at a time: two cores do not run more in parallel.
           fileParallelism: false,
+          // After the API tests, not beside them: both use the one test database, and an API test's
+          // outbox worker would otherwise send a browser test's mail into its own mail catcher.
+          sequence: { groupOrder: 1 },
           testTimeout: 60_000,
         },
       },
