@@ -41,8 +41,8 @@ export default defineConfig({
           environment: 'node',
           // One browser and one server at a time: two cores do not run more in parallel.
           fileParallelism: false,
-          // After the API tests, not beside them: both use the one test database, and an API test's
-          // outbox worker would otherwise send a browser test's mail into its own mail catcher.
+          // A group of their own, never beside the API tests: both use the one test database, and an
+          // API test's outbox worker would otherwise send a browser test's mail into its own catcher.
           sequence: { groupOrder: 1 },
           testTimeout: 60_000,
         },

@@ -8,7 +8,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
-import { meQueryKey } from './features/auth/api/get-me';
+import { meQueryKey } from './lib/viewer';
 import { createQueryClient } from './lib/query-client';
 
 const queryClient = createQueryClient({

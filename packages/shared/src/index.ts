@@ -6,3 +6,4 @@ export * from './power-tree';
 export * from './auth';
 export * from './board-edits';
 export * from './casebook';
+export * from './notifications';

@@ -4,7 +4,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { AppShell } from '../components/layout/app-shell';
 import { adminQueryKey } from '../features/admin/api/get-admin-users';
-import { useSignedInUser } from '../features/auth/api/get-me';
+import { useSignedInUser } from '../lib/viewer';
 import { SignInNotice } from '../features/auth/components/sign-in-notice';
 import { UserMenu } from '../features/auth/components/user-menu';
 import { useMailboxAvailable } from '../features/mailbox/api/get-mailbox';

@@ -2,6 +2,7 @@ import express from 'express';
 import nodemailer from 'nodemailer';
 import request from 'supertest';
 import { afterEach, describe, expect, it } from 'vitest';
+import { caughtMailSchema } from '@railyard/shared';
 import { createMailer } from '../../modules/notifications/mailer';
 import { createMailCatcher, type MailCatcher } from './mail-catcher';
 import { mailboxRouter } from './mailbox.routes';
@@ -129,6 +130,8 @@ describe('GET /dev/mailbox', () => {
       'text',
       'to',
     ]);
+    // the shape the web client reads, from the shared contract
+    expect(caughtMailSchema.array().safeParse(all.body.messages).success).toBe(true);
 
     const lee = await request(app).get('/api/dev/mailbox?to=LEE@example.com');
     expect(lee.body.messages.map((m: { subject: string }) => m.subject)).toEqual(['second']);

@@ -4,21 +4,7 @@
 import type { AddressInfo } from 'node:net';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
-
-export interface CaughtMail {
-  id: number;
-  from: string;
-  /** header recipients (To and Cc) */
-  to: string[];
-  /** SMTP envelope recipients (RCPT TO), which is where the mail would really have gone */
-  envelopeTo: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-  /** the Date header */
-  date: string | null;
-  receivedAt: string;
-}
+import type { CaughtMail } from '@railyard/shared';
 
 export interface MailCatcherOptions {
   /** 0 (the default) picks a free port */

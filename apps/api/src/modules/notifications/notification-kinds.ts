@@ -16,14 +16,13 @@ export type NotificationKind = (typeof notificationKinds)[number];
 export const notificationStatuses = ['pending', 'sent', 'failed', 'skipped'] as const;
 export type NotificationStatus = (typeof notificationStatuses)[number];
 
-export const notificationModes = ['off', 'immediate', 'daily_digest'] as const;
-export type NotificationMode = (typeof notificationModes)[number];
-/** Someone who never chose gets each notification as it happens. */
-export const defaultNotificationMode: NotificationMode = 'immediate';
-
-export const notificationModeSchema = z.enum(notificationModes);
-export const notificationPreferencesInputSchema = z.strictObject({ mode: notificationModeSchema });
-export type NotificationPreferencesInput = z.infer<typeof notificationPreferencesInputSchema>;
+// the modes are part of the API contract (packages/shared); the outbox's kinds and payloads are the API's own
+export {
+  defaultNotificationMode,
+  notificationModes,
+  notificationPreferencesInputSchema,
+  type NotificationMode,
+} from '@railyard/shared';
 
 const id = z.number().int().positive();
 const title = z.string().trim().min(1).max(300);

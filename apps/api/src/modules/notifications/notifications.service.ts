@@ -1,13 +1,8 @@
 // Each person's choice of how to get notification e-mails.
 import { AppError } from '../../lib/app-error';
+import type { NotificationSettings } from '@railyard/shared';
 import { defaultNotificationMode, type NotificationMode } from './notification-kinds';
 import type { NotificationsRepository } from './notifications.repository';
-
-export interface NotificationSettings {
-  mode: NotificationMode;
-  /** where the mails go (the verified primary address from sign-in); null means none can be sent */
-  email: string | null;
-}
 
 export function createNotificationsService(deps: {
   repo: NotificationsRepository;

@@ -8,7 +8,7 @@ import { adminUsersQueryOptions } from '../../features/admin/api/get-admin-users
 import { auditLogQueryOptions } from '../../features/admin/api/get-audit-log';
 import { AuditLog } from '../../features/admin/components/audit-log';
 import { UsersTable } from '../../features/admin/components/users-table';
-import { meQueryOptions, useSignedInUser } from '../../features/auth/api/get-me';
+import { meQueryOptions, useSignedInUser } from '../../lib/viewer';
 import { RoleGate } from '../../features/auth/components/role-gate';
 import { hasRole } from '../../lib/roles';
 

@@ -10,7 +10,7 @@ import { netsQueryOptions } from '../../features/boards/api/get-nets';
 import { boardCasesQueryOptions } from '../../features/casebook/api/get-board-cases';
 import { filtersFromSearch } from '../../features/casebook/case-list-params';
 import { CaseList } from '../../features/casebook/components/case-list';
-import { useViewer } from '../../lib/viewer';
+import { useSignedInUser } from '../../lib/viewer';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -29,7 +29,7 @@ export default function BoardCasesRoute() {
   const { data: board } = useBoard(slug);
   // The net filter works without them until they arrive.
   const nets = useQuery(netsQueryOptions(slug)).data?.nets;
-  const viewer = useViewer();
+  const viewer = useSignedInUser();
   return (
     <div className="mx-auto max-w-6xl px-4 py-5">
       <title>{`Cases · ${board.title} · Railyard`}</title>

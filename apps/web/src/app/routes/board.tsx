@@ -2,7 +2,7 @@ import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { Navigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { paths } from '../../config/paths';
-import { useSignedInUser } from '../../features/auth/api/get-me';
+import { useSignedInUser } from '../../lib/viewer';
 import { boardQueryOptions, useBoard } from '../../features/boards/api/get-board';
 import { netsQueryOptions } from '../../features/boards/api/get-nets';
 import { BoardHeader } from '../../features/boards/components/board-header';

@@ -3,7 +3,7 @@ import { PageHeader } from '../../components/layout/page-header';
 import { LinkButton } from '../../components/ui/button';
 import { paths } from '../../config/paths';
 import { hasRole } from '../../lib/roles';
-import { useSignedInUser } from '../../features/auth/api/get-me';
+import { useSignedInUser } from '../../lib/viewer';
 import { boardsQueryOptions } from '../../features/boards/api/get-boards';
 import { BoardList } from '../../features/boards/components/board-list';
 

@@ -7,7 +7,7 @@ import { commentsQueryOptions } from '../../features/casebook/api/get-comments';
 import { caseIdOf } from '../../features/casebook/case-id';
 import { mergedRedirectHref } from '../../features/casebook/case-merge';
 import { CaseView } from '../../features/casebook/components/case-view';
-import { useViewer } from '../../lib/viewer';
+import { useSignedInUser } from '../../lib/viewer';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -23,7 +23,7 @@ export const clientLoader =
 export default function CaseRoute() {
   const id = caseIdOf(useParams().id);
   const { data: detail } = useCase(id);
-  const viewer = useViewer();
+  const viewer = useSignedInUser();
   const navigate = useNavigate();
   // A merged case's id answers with the case it was merged into: go to that case's own address,
   // and drop this address from the history (it would only lead there again).

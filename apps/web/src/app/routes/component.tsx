@@ -18,7 +18,7 @@ import {
   ComponentCasesPanel,
   componentCasesShown,
 } from '../../features/casebook/components/component-cases-panel';
-import { useViewer } from '../../lib/viewer';
+import { useSignedInUser } from '../../lib/viewer';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -40,7 +40,7 @@ export const clientLoader =
   };
 
 function WriteUpLink({ slug, refdes }: { slug: string; refdes: string }) {
-  const viewer = useViewer();
+  const viewer = useSignedInUser();
   const href = paths.newCase.getHref(slug, { component: refdes });
   if (viewer) {
     return (

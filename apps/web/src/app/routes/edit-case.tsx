@@ -10,7 +10,7 @@ import { boardPartsQueryOptions } from '../../features/casebook/api/get-board-pa
 import { caseQueryOptions, useCase } from '../../features/casebook/api/get-case';
 import { caseIdOf } from '../../features/casebook/case-id';
 import { CaseEditor } from '../../features/casebook/components/case-editor';
-import { useViewer } from '../../lib/viewer';
+import { useSignedInUser } from '../../lib/viewer';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -27,7 +27,7 @@ export default function EditCaseRoute() {
   const { data: detail } = useCase(id);
   const slug = detail.board.slug;
   const nets = useQuery(netsQueryOptions(slug)).data?.nets;
-  const viewer = useViewer();
+  const viewer = useSignedInUser();
   const navigate = useNavigate();
   return (
     <div className="mx-auto max-w-7xl px-4 py-5">

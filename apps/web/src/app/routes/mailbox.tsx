@@ -1,7 +1,7 @@
 // A development tool: the mail this server sent, caught before it left. Open to anyone, as the API's
 // mailbox is; the reader's own address, when they are signed in, is where the filter starts.
 import { PageHeader } from '../../components/layout/page-header';
-import { useSignedInUser } from '../../features/auth/api/get-me';
+import { useSignedInUser } from '../../lib/viewer';
 import { MailboxView } from '../../features/mailbox/components/mailbox-view';
 import { useOwnEmail } from '../../features/notifications/api/get-notification-settings';
 

@@ -5,7 +5,7 @@ import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { PageHeader } from '../../components/layout/page-header';
 import { SectionLoading } from '../../components/layout/section-loading';
-import { meQueryOptions } from '../../features/auth/api/get-me';
+import { meQueryOptions } from '../../lib/viewer';
 import { RoleGate } from '../../features/auth/components/role-gate';
 import { flagsQueryOptions } from '../../features/moderation/api/get-flags';
 import { FlagQueue, FlagQueueTabs } from '../../features/moderation/components/flag-queue';

@@ -5,7 +5,7 @@ import { useCallback } from 'react';
 import { redirect, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { paths } from '../../config/paths';
-import { useSignedInUser } from '../../features/auth/api/get-me';
+import { useSignedInUser } from '../../lib/viewer';
 import { boardQueryOptions, useBoard } from '../../features/boards/api/get-board';
 import { NetCasesPanel } from '../../features/casebook/components/net-cases-panel';
 import { netsQueryOptions } from '../../features/boards/api/get-nets';

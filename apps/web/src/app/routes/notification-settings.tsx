@@ -3,7 +3,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Suspense } from 'react';
 import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { PageHeader } from '../../components/layout/page-header';
-import { meQueryOptions, useSignedInUser } from '../../features/auth/api/get-me';
+import { meQueryOptions, useSignedInUser } from '../../lib/viewer';
 import { RoleGate } from '../../features/auth/components/role-gate';
 import { notificationSettingsQueryOptions } from '../../features/notifications/api/get-notification-settings';
 import { NotificationSettingsForm } from '../../features/notifications/components/notification-settings-form';

@@ -1,7 +1,7 @@
 import type { MeResponse } from '@railyard/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { meQueryKey } from './get-me';
+import { meQueryKey } from '../../../lib/viewer';
 
 export function signOut(): Promise<void> {
   return api.post<void>('/auth/logout');

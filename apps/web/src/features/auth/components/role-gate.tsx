@@ -4,7 +4,7 @@ import type { UserRole } from '@railyard/shared';
 import type { ReactNode } from 'react';
 import { RoleBadge } from '../../../components/ui/role-badge';
 import { hasRole } from '../../../lib/roles';
-import { useSignedInUser } from '../api/get-me';
+import { useSignedInUser } from '../../../lib/viewer';
 import { SignInLink } from './sign-in-link';
 
 type RoleGateProps = {

@@ -7,7 +7,7 @@ import { Avatar } from '../../../components/ui/avatar';
 import { RoleBadge } from '../../../components/ui/role-badge';
 import { paths } from '../../../config/paths';
 import { hasRole, roleAbilities } from '../../../lib/roles';
-import { useSignedInUser } from '../api/get-me';
+import { useSignedInUser } from '../../../lib/viewer';
 import { useSignOut } from '../api/sign-out';
 import { SignInLink } from './sign-in-link';
 

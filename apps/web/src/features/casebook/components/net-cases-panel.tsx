@@ -3,7 +3,7 @@
 import type { CaseSummary } from '@railyard/shared';
 import { Link } from 'react-router-dom';
 import { paths } from '../../../config/paths';
-import { useViewer } from '../../../lib/viewer';
+import { useSignedInUser } from '../../../lib/viewer';
 import { useNetCases } from '../api/get-net-cases';
 import { culpritTally } from '../culprit-tally';
 import { CulpritChip, ScoreLine } from './case-marks';
@@ -49,7 +49,7 @@ function NetCaseRow({ summary }: { summary: CaseSummary }) {
 
 export function NetCasesPanel({ slug, net }: { slug: string; net: string }) {
   const cases = useNetCases(slug, net, shownCases);
-  const viewer = useViewer();
+  const viewer = useSignedInUser();
   const shownNet = cases.data?.net ?? net;
   return (
     <LinkedCasesPanel

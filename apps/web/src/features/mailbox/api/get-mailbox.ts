@@ -1,24 +1,9 @@
 // The development server's caught mail (GET /api/dev/mailbox). The API mounts it only outside
 // production when no SMTP_URL is set; anywhere else it answers 404, which is an answer here, not an
 // error: this server sends real mail and keeps none.
+import type { CaughtMail } from '@railyard/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, isApiError } from '../../../lib/api-client';
-
-/** One caught message, as apps/api/src/dev/mail-catcher/mail-catcher.ts keeps it. */
-export type CaughtMail = {
-  id: number;
-  from: string;
-  /** header recipients (To and Cc) */
-  to: string[];
-  /** where the mail would really have gone (RCPT TO) */
-  envelopeTo: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-  /** the Date header */
-  date: string | null;
-  receivedAt: string;
-};
 
 export type Mailbox = { available: true; messages: CaughtMail[] } | { available: false };
 

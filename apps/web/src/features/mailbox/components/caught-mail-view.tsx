@@ -2,7 +2,7 @@
 // show it, its plain-text part, and its links as links a tester can follow.
 import { Link } from 'react-router-dom';
 import { formatDateTime } from '../../../lib/date-format';
-import type { CaughtMail } from '../api/get-mailbox';
+import type { CaughtMail } from '@railyard/shared';
 import { linksInMail } from '../mail-links';
 
 function sameAddresses(a: string[], b: string[]): boolean {

@@ -6,7 +6,8 @@ import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
 import { controlClass } from '../../../components/ui/field';
 import { formatDateTime } from '../../../lib/date-format';
-import { mailboxRefreshMs, useMailbox, type CaughtMail } from '../api/get-mailbox';
+import type { CaughtMail } from '@railyard/shared';
+import { mailboxRefreshMs, useMailbox } from '../api/get-mailbox';
 import { CaughtMailView } from './caught-mail-view';
 
 const typingPause = 300;

@@ -1,16 +1,7 @@
-// How the signed-in person gets notification e-mails (GET /api/me/notifications). The contract has no
-// shared schema yet; these types follow apps/api/src/modules/notifications/notifications.service.ts.
+// How the signed-in person gets notification e-mails (GET /api/me/notifications).
+import type { NotificationSettings } from '@railyard/shared';
 import { queryOptions, useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-
-export const notificationModes = ['off', 'immediate', 'daily_digest'] as const;
-export type NotificationMode = (typeof notificationModes)[number];
-
-export type NotificationSettings = {
-  mode: NotificationMode;
-  /** the verified primary address from the last sign-in; null means no mail can be sent */
-  email: string | null;
-};
 
 export function getNotificationSettings(signal?: AbortSignal): Promise<NotificationSettings> {
   return api.get<NotificationSettings>('/me/notifications', { signal });

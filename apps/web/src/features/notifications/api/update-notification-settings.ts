@@ -1,10 +1,7 @@
+import type { NotificationMode, NotificationSettings } from '@railyard/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import {
-  notificationSettingsQueryKey,
-  type NotificationMode,
-  type NotificationSettings,
-} from './get-notification-settings';
+import { notificationSettingsQueryKey } from './get-notification-settings';
 
 export function updateNotificationSettings(mode: NotificationMode): Promise<NotificationSettings> {
   return api.put<NotificationSettings>('/me/notifications', { mode });

@@ -1,13 +1,10 @@
 // The choice of how Railyard e-mails someone, and where it goes. The server reads the choice when a
 // mail is due, not when the event happens, so a change also applies to mail still waiting.
+import { notificationModes, type NotificationMode } from '@railyard/shared';
 import { useId, useState, type FormEvent } from 'react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
-import {
-  notificationModes,
-  useNotificationSettings,
-  type NotificationMode,
-} from '../api/get-notification-settings';
+import { useNotificationSettings } from '../api/get-notification-settings';
 import { useUpdateNotificationSettings } from '../api/update-notification-settings';
 
 const modeChoices: Record<NotificationMode, { label: string; text: string }> = {
