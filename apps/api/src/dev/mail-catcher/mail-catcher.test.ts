@@ -136,4 +136,23 @@ describe('GET /dev/mailbox', () => {
     const lee = await request(app).get('/api/dev/mailbox?to=LEE@example.com');
     expect(lee.body.messages.map((m: { subject: string }) => m.subject)).toEqual(['second']);
   });
+
+  it('serves one message’s HTML part with a policy that allows its inline styles and nothing else', async () => {
+    const { port } = await started();
+    const mailer = createMailer({ kind: 'catcher', port }, 'a@example.com');
+    await mailer.send({ to: 'dana@example.com', subject: 's', text: 't', html: '<p style="color:#063">styled</p>' });
+    mailer.close();
+    const app = express().use('/api', mailboxRouter(catcher!));
+    const [mail] = (await request(app).get('/api/dev/mailbox')).body.messages as { id: number }[];
+
+    const page = await request(app).get(`/api/dev/mailbox/${mail!.id}/html`);
+    expect(page.status).toBe(200);
+    expect(page.headers['content-type']).toMatch(/^text\/html/);
+    expect(page.text).toContain('<p style="color:#063">styled</p>');
+    // CSP Level 3 directives: no default sources, inline styles only, framed by this site only, sandboxed
+    const policy = String(page.headers['content-security-policy']).split(';').map((d) => d.trim());
+    expect(policy).toEqual(expect.arrayContaining(["default-src 'none'", "style-src 'unsafe-inline'", "frame-ancestors 'self'", 'sandbox']));
+    expect(policy.some((d) => d.startsWith('script-src'))).toBe(false);
+    expect((await request(app).get('/api/dev/mailbox/999999/html')).status).toBe(404);
+  });
 });

@@ -28,6 +28,11 @@ export async function getMailbox(query: MailboxQuery, signal?: AbortSignal): Pro
 
 export const mailboxQueryKey = ['dev-mailbox'] as const;
 
+/** Where one caught message's HTML part is served as a page of its own. */
+export function mailHtmlHref(id: number): string {
+  return `/api/dev/mailbox/${id}/html`;
+}
+
 /** Mail comes in without the page doing anything, so the list asks again every few seconds. */
 export const mailboxRefreshMs = 4_000;
 

@@ -1,8 +1,9 @@
 // One caught message in full: who it went to, its HTML part as the recipient's mail program would
 // show it, its plain-text part, and its links as links a tester can follow.
+import type { CaughtMail } from '@railyard/shared';
 import { Link } from 'react-router-dom';
 import { formatDateTime } from '../../../lib/date-format';
-import type { CaughtMail } from '@railyard/shared';
+import { mailHtmlHref } from '../api/get-mailbox';
 import { linksInMail } from '../mail-links';
 
 function sameAddresses(a: string[], b: string[]): boolean {
@@ -73,17 +74,17 @@ export function CaughtMailView({ mail }: { mail: CaughtMail }) {
       {mail.html !== null && (
         <section aria-label="HTML part" className="px-4 pt-3">
           <h3 className="mb-1.5 text-[13px] font-medium">HTML part</h3>
-          {/* No scripts, forms, navigation or same-origin access: the frame only shows the mail. */}
+          {/* No scripts, forms, navigation or same-origin access: the frame only shows the mail,
+              served with a policy of its own that lets its inline styles through. */}
           <iframe
             sandbox=""
-            srcDoc={mail.html}
+            src={mailHtmlHref(mail.id)}
             title={`HTML part of ${mail.subject || 'the message'}`}
             referrerPolicy="no-referrer"
             className="h-72 w-full resize-y rounded-md border border-line bg-white"
           />
           <p className="mt-1 text-xs text-ink-faint">
-            The frame runs no scripts and falls under this site’s Content Security Policy, which
-            also keeps out the mail’s inline styles where the policy is sent (a built client).
+            Shown as sent, in a frame that runs no scripts and loads nothing from elsewhere.
           </p>
         </section>
       )}
