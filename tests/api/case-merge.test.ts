@@ -537,6 +537,42 @@ describe('refused merges', () => {
     expect(writes.edit.body.error.message).toBe(message);
     expect(writes.attach.body.error.message).toBe(`Case ${s.A} was merged into case ${s.B}: attach files there`);
   });
+
+  it('makes a vote or comment sent while the merge runs wait for it, then refuses it', async () => {
+    const s = await duplicatePair();
+    const member = await t.agentAs('member');
+    const before = await idsOf(s.A);
+    // Stands in for a merge in progress: holds the duplicate's row as the merge does (FOR UPDATE) and
+    // marks it merged, so the writes pass the service's first check and meet the lock.
+    const merging = await t.pool.connect();
+    try {
+      await merging.query('BEGIN');
+      await merging.query('SELECT 1 FROM cases WHERE id = $1 FOR UPDATE', [s.A]);
+      await merging.query('UPDATE cases SET merged_into_id = $2 WHERE id = $1', [s.A, s.B]);
+      const vote = member.put(`/api/cases/${s.A}/vote`).send({ value: 1 }).then((r) => r);
+      const comment = member.post(`/api/cases/${s.A}/comments`).send({ body: 'Sent as it merged' }).then((r) => r);
+      // both are waiting on the row lock
+      await expect
+        .poll(async () => {
+          const { rows } = await t.pool.query<{ waiting: number }>(
+            'SELECT count(DISTINCT pid)::int AS waiting FROM pg_locks WHERE NOT granted',
+          );
+          return rows[0]!.waiting;
+        })
+        .toBeGreaterThanOrEqual(2);
+      await merging.query('COMMIT');
+
+      for (const res of [await vote, await comment]) {
+        expect(res.status, JSON.stringify(res.body)).toBe(409);
+        expect(res.body.error.code).toBe('case_merged');
+      }
+    } finally {
+      merging.release();
+    }
+    const after = await idsOf(s.A);
+    expect(after.votes).toEqual(before.votes);
+    expect(after.comments).toEqual(before.comments);
+  });
 });
 
 describe('undoing a merge', () => {

@@ -15,6 +15,7 @@ import type {
   CaseSummary,
   ReadingMode,
 } from '@railyard/shared';
+import { AppError } from '../../lib/app-error';
 import type { Database } from '../../db/client';
 import {
   auditLog,
@@ -269,9 +270,28 @@ async function rescore(tx: Tx, caseId: number, scorer: CaseScorer) {
  * concurrent votes on one case recount one after the other. NO KEY UPDATE leaves inserts of comments
  * and votes (which only take key-share locks on the case) unblocked.
  */
+/**
+ * Locks the case row for a change to what hangs off it and refuses a case merged away meanwhile: a merge
+ * holds the row FOR UPDATE, so a vote or comment sent in the same instant waits for it and then finds
+ * the case merged instead of landing on it after its rows moved.
+ */
+async function lockUnmergedCase(tx: Tx, caseId: number, lock: 'no key update' | 'key share') {
+  const result = await tx.execute<{ merged_into_id: number | null }>(
+    lock === 'no key update'
+      ? sql`SELECT merged_into_id FROM cases WHERE id = ${caseId} FOR NO KEY UPDATE`
+      : sql`SELECT merged_into_id FROM cases WHERE id = ${caseId} FOR KEY SHARE`,
+  );
+  const mergedInto = result.rows[0]?.merged_into_id ?? null;
+  if (mergedInto !== null) {
+    throw new AppError(409, 'case_merged', `Case ${caseId} was merged into case ${mergedInto}: make changes there`, {
+      mergedIntoId: mergedInto,
+    });
+  }
+}
+
 function changeEvidence<T>(db: Database, caseId: number, scorer: CaseScorer, change: (tx: Tx) => Promise<T>): Promise<T> {
   return db.transaction(async (tx) => {
-    await tx.execute(sql`SELECT 1 FROM cases WHERE id = ${caseId} FOR NO KEY UPDATE`);
+    await lockUnmergedCase(tx, caseId, 'no key update');
     const result = await change(tx);
     await rescore(tx, caseId, scorer);
     return result;
@@ -936,6 +956,7 @@ export function createCasebookRepository(db: Database) {
     /** `notify` builds the notification from the new comment's id; it commits with the comment. */
     async insertComment(caseId: number, authorId: number, body: string, notify: ((commentId: number) => EnqueueInput) | null = null): Promise<number> {
       return db.transaction(async (tx) => {
+        await lockUnmergedCase(tx, caseId, 'key share');
         const [row] = await tx.insert(caseComments).values({ caseId, authorId, body }).returning({ id: caseComments.id });
         if (notify) await enqueueNotification(tx, notify(row!.id));
         return row!.id;
