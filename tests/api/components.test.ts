@@ -118,6 +118,12 @@ describe('GET /api/boards/:slug/components/:refdes', () => {
     expect(expected.slice(0, 3)).toEqual(['A1', 'A2', 'A10']);
   });
 
+  it('gives the power links that pass through the part, and none for a part no link passes through', async () => {
+    // the annotations above enter one link: VSYS → VCC_1V8 through the converter U1
+    expect((await part('U1')).powerLinks).toEqual([{ from: 'VSYS', to: 'VCC_1V8', kind: 'converter', origin: 'entered' }]);
+    expect((await part('C1')).powerLinks).toEqual([]);
+  });
+
   it('finds the part whatever the letter case of the refdes asked for, and answers with its own spelling', async () => {
     const lower = await part('u2');
     expect(lower.component.refdes).toBe('U2');

@@ -122,6 +122,11 @@ describe('a part’s page in the browser', () => {
       .toContain('1 solved case');
     const cases = page.getByRole('region', { name: 'Cases naming this part' });
     await expect.poll(() => cases.getByRole('link', { name: written.title }).count()).toBe(1);
+    // U1 is the converter the annotations put between VSYS and VCC_1V8
+    const links = page.getByRole('list', { name: 'Power links through U1' });
+    await expect.poll(() => links.getByRole('listitem').allTextContents()).toEqual([
+      expect.stringMatching(/^VSYS\s*VCC_1V8\s*converter$/),
+    ]);
 
     const ninth = pins
       .getByRole('row')

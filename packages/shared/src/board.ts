@@ -162,6 +162,10 @@ export type ComponentPin = z.infer<typeof componentPinSchema>;
 export const componentDetailSchema = z.object({
   board: boardSlugSchema,
   component: componentRowSchema.omit({ pins: true }).extend({ pins: z.array(componentPinSchema) }),
+  /** the power links that pass through the part (it is the converter, switch or series part between them) */
+  powerLinks: z.array(
+    z.object({ from: z.string(), to: z.string(), kind: powerLinkKindSchema, origin: powerLinkOriginSchema }),
+  ),
   casebook: z.object({
     /** published cases, neither hidden nor merged away, that name the part */
     cases: z.number().int(),

@@ -1,6 +1,6 @@
 // Reads of boards and their netlists. The only boards code that talks to the database.
 import { eq, sql } from 'drizzle-orm';
-import type { BoardSummary, ComponentPin, ComponentRow, NetKind, NetRow } from '@railyard/shared';
+import type { BoardSummary, ComponentPin, ComponentRow, NetKind, NetRow, PowerLinkKind, PowerLinkOrigin } from '@railyard/shared';
 import type { Database } from '../../db/client';
 import { boards } from '../../db/schema';
 import { countCases, countSolvedAsCulprit } from '../casebook/casebook.repository';
@@ -216,6 +216,16 @@ export function createBoardsRepository(db: Database) {
     },
 
     /** The part's record in the casebook, counted by the same queries as the casebook's own lists. */
+    /** Power links through one part, from the source rail's side, in name order. */
+    async powerLinksThrough(boardId: number, componentId: number) {
+      const result = await db.execute<{ from: string; to: string; kind: PowerLinkKind; origin: PowerLinkOrigin }>(sql`
+        SELECT f.name AS "from", t.name AS "to", l.kind, l.origin
+        FROM power_links l JOIN nets f ON f.id = l.from_net_id JOIN nets t ON t.id = l.to_net_id
+        WHERE l.board_id = ${boardId} AND l.via_component_id = ${componentId}
+        ORDER BY f.name, t.name`);
+      return result.rows;
+    },
+
     async casebookTally(boardId: number, componentId: number) {
       const [cases, solvedAsCulprit] = await Promise.all([
         countCases(db, { boardId, status: 'published', componentId }),

@@ -50,6 +50,7 @@ export function createBoardsService(repo: BoardsRepository) {
       return {
         board: board.slug,
         component: { ...component, pins: [...pins].sort((a, b) => comparePins(a.pin, b.pin)) },
+        powerLinks: await repo.powerLinksThrough(board.id, id),
         casebook: await repo.casebookTally(board.id, id),
       };
     },

@@ -18,6 +18,7 @@ import {
   ComponentCasesPanel,
   componentCasesShown,
 } from '../../features/casebook/components/component-cases-panel';
+import { PartPowerLinks } from '../../features/power-tree/components/part-power-links';
 import { useSignedInUser } from '../../lib/viewer';
 
 export const clientLoader =
@@ -75,7 +76,10 @@ export default function ComponentRoute() {
         actions={<WriteUpLink slug={slug} refdes={refdes} />}
       />
       <div className="grid items-start gap-3 px-4 pt-3 pb-6 lg:grid-cols-[minmax(0,36rem)_minmax(0,1fr)]">
-        <ComponentPinsTable slug={slug} refdes={refdes} pins={detail.component.pins} />
+        <div className="space-y-3">
+          <ComponentPinsTable slug={slug} refdes={refdes} pins={detail.component.pins} />
+          <PartPowerLinks slug={slug} refdes={refdes} links={detail.powerLinks} />
+        </div>
         <SectionErrorBoundary title="Could not show the cases" resetKeys={[slug, refdes]}>
           <ComponentCasesPanel slug={slug} refdes={refdes} />
         </SectionErrorBoundary>
