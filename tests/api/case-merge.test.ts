@@ -453,6 +453,32 @@ describe('refused merges', () => {
     expect(res.body.error.details.issues).toEqual([{ field: 'intoCaseId', message: `case ${s.A} cannot be merged into itself` }]);
   });
 
+  it('answers 400 naming the field for a merge or an undo sent without a reason or a case number, and changes nothing', async () => {
+    const s = await duplicatePair();
+    const before = await totalRows();
+    const url = `/api/cases/${s.A}/merge`;
+    const fieldsOf = (res: Response) => (res.body.error.details.issues as { field: string }[]).map((i) => i.field);
+
+    const noReason = await s.moderator.post(url).send({ intoCaseId: s.B });
+    expect(noReason.status).toBe(400);
+    expect(fieldsOf(noReason)).toEqual(['reason']);
+    const textNumber = await s.moderator.post(url).send({ intoCaseId: String(s.B), reason: 'same fault twice' });
+    expect(textNumber.status).toBe(400);
+    expect(fieldsOf(textNumber)).toEqual(['intoCaseId']);
+    const stray = await s.moderator.post(url).send({ intoCaseId: s.B, reason: 'same fault twice', keepVotes: true });
+    expect(stray.status).toBe(400);
+    const mergeId = (await ok(merge(s.moderator, s.A, s.B))).body.merge.auditId as number;
+    const afterMerge = await totalRows();
+    const undoNoReason = await admin.post(`/api/admin/audit/${mergeId}/undo`).send({});
+    expect(undoNoReason.status).toBe(400);
+    expect(fieldsOf(undoNoReason)).toEqual(['reason']);
+    expect((await admin.post('/api/admin/audit/not-a-number/undo').send({ reason: 'wrong merge' })).status).toBe(400);
+
+    // only the accepted merge wrote anything, and the refused undo nothing
+    expect(afterMerge.case_revisions).toBe(before.case_revisions! + 1);
+    expect(await totalRows()).toEqual(afterMerge);
+  });
+
   it('answers 404 for an unknown case on either side', async () => {
     const s = await duplicatePair();
     const unknownInto = await merge(s.moderator, s.A, 2147483000);

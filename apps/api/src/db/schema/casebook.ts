@@ -28,6 +28,11 @@ export const readingModeEnum = pgEnum('reading_mode', readingModes);
 
 const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
 const updatedAt = () => timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow();
+/** The case a row belongs to; the row goes with the case. */
+const caseRef = () =>
+  integer()
+    .notNull()
+    .references((): AnyPgColumn => cases.id, { onDelete: 'cascade' });
 
 export const cases = pgTable(
   'cases',
@@ -84,9 +89,7 @@ export const caseReadings = pgTable(
   'case_readings',
   {
     id: id(),
-    caseId: integer()
-      .notNull()
-      .references(() => cases.id, { onDelete: 'cascade' }),
+    caseId: caseRef(),
     position: integer().notNull(),
     /** as printed on the board when entered; kept as text so a replaced netlist does not lose it */
     netName: text().notNull(),
@@ -101,9 +104,7 @@ export const caseNets = pgTable(
   'case_nets',
   {
     id: id(),
-    caseId: integer()
-      .notNull()
-      .references(() => cases.id, { onDelete: 'cascade' }),
+    caseId: caseRef(),
     netId: integer()
       .notNull()
       .references(() => nets.id, { onDelete: 'cascade' }),
@@ -115,9 +116,7 @@ export const caseComponents = pgTable(
   'case_components',
   {
     id: id(),
-    caseId: integer()
-      .notNull()
-      .references(() => cases.id, { onDelete: 'cascade' }),
+    caseId: caseRef(),
     componentId: integer()
       .notNull()
       .references(() => components.id, { onDelete: 'cascade' }),
@@ -133,9 +132,7 @@ export const caseRevisions = pgTable(
   'case_revisions',
   {
     id: id(),
-    caseId: integer()
-      .notNull()
-      .references(() => cases.id, { onDelete: 'cascade' }),
+    caseId: caseRef(),
     editorId: integer()
       .notNull()
       .references(() => users.id),
@@ -152,9 +149,7 @@ export const caseVotes = pgTable(
   'case_votes',
   {
     id: id(),
-    caseId: integer()
-      .notNull()
-      .references(() => cases.id, { onDelete: 'cascade' }),
+    caseId: caseRef(),
     userId: integer()
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
@@ -174,9 +169,7 @@ export const caseConfirmations = pgTable(
   'case_confirmations',
   {
     id: id(),
-    caseId: integer()
-      .notNull()
-      .references(() => cases.id, { onDelete: 'cascade' }),
+    caseId: caseRef(),
     userId: integer()
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
@@ -190,9 +183,7 @@ export const caseComments = pgTable(
   'case_comments',
   {
     id: id(),
-    caseId: integer()
-      .notNull()
-      .references(() => cases.id, { onDelete: 'cascade' }),
+    caseId: caseRef(),
     authorId: integer()
       .notNull()
       .references(() => users.id),

@@ -483,6 +483,36 @@ function movedRows(moved: {
 }
 
 /**
+ * Tables holding at most one row per case and `key` (a net, a part, a person): a merge moves a row only
+ * where the other case has none with the same key.
+ */
+type OnePerCase =
+  | { table: 'case_nets'; key: 'net_id' }
+  | { table: 'case_components'; key: 'component_id' }
+  | { table: 'case_confirmations'; key: 'user_id' }
+  | { table: 'case_votes'; key: 'user_id' };
+
+/** Moves `from`'s rows to `into` where `into` has no row of the same key; `exceptKey` stays behind too. */
+function moveWhereAbsent(tx: Tx, { table, key }: OnePerCase, fromId: number, intoId: number, exceptKey: number | null = null) {
+  const [t, k] = [sql.identifier(table), sql.identifier(key)];
+  return tx.execute<{ id: number }>(sql`
+    UPDATE ${t} SET case_id = ${intoId}
+    WHERE case_id = ${fromId} ${exceptKey === null ? sql`` : sql`AND ${k} <> ${exceptKey}`}
+      AND ${k} NOT IN (SELECT ${k} FROM ${t} WHERE case_id = ${intoId})
+    RETURNING id`);
+}
+
+/** Moves the listed rows still on `intoId` back to `fromId`, unless `fromId` holds one of the same key again. */
+function moveBackWhereAbsent(tx: Tx, { table, key }: OnePerCase, ids: SQL, fromId: number, intoId: number) {
+  const [t, k] = [sql.identifier(table), sql.identifier(key)];
+  return tx.execute<{ id: number }>(sql`
+    UPDATE ${t} m SET case_id = ${fromId}
+    WHERE m.id = ANY(${ids}) AND m.case_id = ${intoId}
+      AND NOT EXISTS (SELECT 1 FROM ${t} o WHERE o.case_id = ${fromId} AND o.${k} = m.${k})
+    RETURNING m.id`);
+}
+
+/**
  * What a merge and its undo do to two cases, inside one transaction that holds both case rows locked.
  * Rows change case by UPDATE, so they keep their ids, authors and dates, and an undo can move back
  * exactly the rows the merge recorded.
@@ -510,14 +540,8 @@ function mergeStore(tx: Tx) {
         FROM case_components d
         WHERE d.case_id = ${fromId} AND d.culprit AND k.case_id = ${intoId} AND k.component_id = d.component_id AND NOT k.culprit
         RETURNING k.id`);
-      const nets = await tx.execute<{ id: number }>(sql`
-        UPDATE case_nets SET case_id = ${intoId}
-        WHERE case_id = ${fromId} AND net_id NOT IN (SELECT net_id FROM case_nets WHERE case_id = ${intoId})
-        RETURNING id`);
-      const components = await tx.execute<{ id: number }>(sql`
-        UPDATE case_components SET case_id = ${intoId}
-        WHERE case_id = ${fromId} AND component_id NOT IN (SELECT component_id FROM case_components WHERE case_id = ${intoId})
-        RETURNING id`);
+      const nets = await moveWhereAbsent(tx, { table: 'case_nets', key: 'net_id' }, fromId, intoId);
+      const components = await moveWhereAbsent(tx, { table: 'case_components', key: 'component_id' }, fromId, intoId);
       const readings = await tx.execute<{ id: number; position: number }>(sql`
         WITH start AS (SELECT COALESCE(max(position) + 1, 0) AS at FROM case_readings WHERE case_id = ${intoId}),
              moving AS (SELECT id, position, (row_number() OVER (ORDER BY position, id) - 1)::int AS k
@@ -530,16 +554,9 @@ function mergeStore(tx: Tx) {
       const comments = await tx.execute<{ id: number }>(sql`
         UPDATE case_comments SET case_id = ${intoId} WHERE case_id = ${fromId} RETURNING id`);
       // one vote and one confirmation per person and case: the kept case's own stays, the other stays behind
-      const confirmations = await tx.execute<{ id: number }>(sql`
-        UPDATE case_confirmations SET case_id = ${intoId}
-        WHERE case_id = ${fromId} AND user_id <> ${intoAuthorId}
-          AND user_id NOT IN (SELECT user_id FROM case_confirmations WHERE case_id = ${intoId})
-        RETURNING id`);
-      const votes = await tx.execute<{ id: number }>(sql`
-        UPDATE case_votes SET case_id = ${intoId}
-        WHERE case_id = ${fromId} AND user_id <> ${intoAuthorId}
-          AND user_id NOT IN (SELECT user_id FROM case_votes WHERE case_id = ${intoId})
-        RETURNING id`);
+      // the kept case's author takes no votes or confirmations on their own case
+      const confirmations = await moveWhereAbsent(tx, { table: 'case_confirmations', key: 'user_id' }, fromId, intoId, intoAuthorId);
+      const votes = await moveWhereAbsent(tx, { table: 'case_votes', key: 'user_id' }, fromId, intoId, intoAuthorId);
       return {
         moved: movedRows({ nets, components, readings, attachments, comments, confirmations, votes }),
         culpritMarked: sortedIds(marked.rows),
@@ -553,16 +570,8 @@ function mergeStore(tx: Tx) {
      */
     async moveBack(fromId: number, intoId: number, moves: CaseMergeMoves, culpritMarked: number[]): Promise<{ back: CaseMergeMoves; culpritCleared: number[] }> {
       const ids = (values: number[]) => sql`${arrayParam(values)}::int[]`;
-      const nets = await tx.execute<{ id: number }>(sql`
-        UPDATE case_nets m SET case_id = ${fromId}
-        WHERE m.id = ANY(${ids(moves.nets)}) AND m.case_id = ${intoId}
-          AND NOT EXISTS (SELECT 1 FROM case_nets o WHERE o.case_id = ${fromId} AND o.net_id = m.net_id)
-        RETURNING m.id`);
-      const components = await tx.execute<{ id: number }>(sql`
-        UPDATE case_components m SET case_id = ${fromId}
-        WHERE m.id = ANY(${ids(moves.components)}) AND m.case_id = ${intoId}
-          AND NOT EXISTS (SELECT 1 FROM case_components o WHERE o.case_id = ${fromId} AND o.component_id = m.component_id)
-        RETURNING m.id`);
+      const nets = await moveBackWhereAbsent(tx, { table: 'case_nets', key: 'net_id' }, ids(moves.nets), fromId, intoId);
+      const components = await moveBackWhereAbsent(tx, { table: 'case_components', key: 'component_id' }, ids(moves.components), fromId, intoId);
       const readings = await tx.execute<{ id: number; position: number }>(sql`
         UPDATE case_readings r SET case_id = ${fromId}, position = v.position
         FROM unnest(${ids(moves.readings.map((r) => r.id))}, ${ids(moves.readings.map((r) => r.position))}) AS v(id, position)
@@ -573,16 +582,8 @@ function mergeStore(tx: Tx) {
         UPDATE case_attachments SET case_id = ${fromId} WHERE id = ANY(${ids(moves.attachments)}) AND case_id = ${intoId} RETURNING id`);
       const comments = await tx.execute<{ id: number }>(sql`
         UPDATE case_comments SET case_id = ${fromId} WHERE id = ANY(${ids(moves.comments)}) AND case_id = ${intoId} RETURNING id`);
-      const confirmations = await tx.execute<{ id: number }>(sql`
-        UPDATE case_confirmations m SET case_id = ${fromId}
-        WHERE m.id = ANY(${ids(moves.confirmations)}) AND m.case_id = ${intoId}
-          AND NOT EXISTS (SELECT 1 FROM case_confirmations o WHERE o.case_id = ${fromId} AND o.user_id = m.user_id)
-        RETURNING m.id`);
-      const votes = await tx.execute<{ id: number }>(sql`
-        UPDATE case_votes m SET case_id = ${fromId}
-        WHERE m.id = ANY(${ids(moves.votes)}) AND m.case_id = ${intoId}
-          AND NOT EXISTS (SELECT 1 FROM case_votes o WHERE o.case_id = ${fromId} AND o.user_id = m.user_id)
-        RETURNING m.id`);
+      const confirmations = await moveBackWhereAbsent(tx, { table: 'case_confirmations', key: 'user_id' }, ids(moves.confirmations), fromId, intoId);
+      const votes = await moveBackWhereAbsent(tx, { table: 'case_votes', key: 'user_id' }, ids(moves.votes), fromId, intoId);
       const cleared = await tx.execute<{ id: number }>(sql`
         UPDATE case_components SET culprit = false
         WHERE id = ANY(${ids(culpritMarked)}) AND case_id = ${intoId} AND culprit

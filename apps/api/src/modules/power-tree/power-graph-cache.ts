@@ -1,4 +1,3 @@
-import { createHash } from 'node:crypto';
 // One power graph per board, built on first use and kept in the API process. Any write to a board's
 // netlist or links sends NOTIFY railyard_board_changed (inside its transaction, so it arrives at commit),
 // and every process listening drops that board's graph. If the listening connection is lost, the whole
@@ -9,6 +8,7 @@ import { createHash } from 'node:crypto';
 // tracing. Both live and die with the graph they came from. Which id a slug names is kept too, and
 // forgotten on the same notifications: a board's slug does not change, and whatever would delete a
 // board must notify like any other write to it.
+import etag from 'etag';
 import type pg from 'pg';
 import { createPowerGraph, type PowerGraph } from '@railyard/board-analysis';
 import type { Logger } from '../../lib/logger';
@@ -36,11 +36,6 @@ export interface TraceJson {
   etag: string;
 }
 
-/** A weak tag of the same form Express makes (`W/"<length hex>-<sha1 base64, 27 chars>"`). */
-export function weakEtag(text: string): string {
-  const hash = createHash('sha1').update(text, 'utf8').digest('base64').slice(0, 27);
-  return `W/"${Buffer.byteLength(text, 'utf8').toString(16)}-${hash}"`;
-}
 
 function cachedBoard(id: number, graph: PowerGraph, rootNet: string | null): CachedBoard {
   const traces = new Map<string, TraceJson>();
@@ -52,7 +47,9 @@ function cachedBoard(id: number, graph: PowerGraph, rootNet: string | null): Cac
       const held = traces.get(key);
       if (held !== undefined) return held;
       const text = serialise();
-      const trace = { bytes: Buffer.from(text, 'utf8'), etag: weakEtag(text) };
+      const bytes = Buffer.from(text, 'utf8');
+      // the package and the weak form Express itself uses for res.send
+      const trace = { bytes, etag: etag(bytes, { weak: true }) };
       if (traces.size >= tracesKeptPerBoard) traces.delete(traces.keys().next().value as string);
       traces.set(key, trace);
       return trace;

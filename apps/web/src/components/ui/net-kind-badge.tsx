@@ -1,6 +1,8 @@
 // Net kinds are told apart by a glyph and a word as well as colour, so they stay
 // distinct for colour-blind readers, on a dim bench monitor and under a magnifier.
 import type { NetKind } from '@railyard/shared';
+import { Badge } from './badge';
+import { StrokeGlyph } from './glyph';
 
 export const netKindLabel: Record<NetKind, string> = {
   power: 'power',
@@ -19,31 +21,19 @@ export const netKindTone: Record<NetKind, string> = {
 
 export function NetKindGlyph({ kind, size = 12 }: { kind: NetKind; size?: number }) {
   return (
-    <svg
-      viewBox="0 0 12 12"
-      width={size}
-      height={size}
-      aria-hidden="true"
-      className="shrink-0"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth="1.5"
-      strokeLinecap="round"
-    >
+    <StrokeGlyph size={size}>
       {kind === 'power' && <path d="M2.5 2.5h7M6 2.5v8" />}
       {kind === 'ground' && <path d="M6 1.5v4M2 5.5h8M3.5 8h5M5 10.5h2" />}
-      {kind === 'signal' && <path d="M1 9h2.5V3h5v6H11" strokeLinejoin="round" />}
-    </svg>
+      {kind === 'signal' && <path d="M1 9h2.5V3h5v6H11" />}
+    </StrokeGlyph>
   );
 }
 
 export function NetKindBadge({ kind }: { kind: NetKind }) {
   return (
-    <span
-      className={`inline-flex h-5 items-center gap-1 rounded border px-1.5 text-[11.5px] leading-none font-medium ${netKindTone[kind]}`}
-    >
+    <Badge tone={netKindTone[kind]}>
       <NetKindGlyph kind={kind} size={11} />
       {netKindLabel[kind]}
-    </span>
+    </Badge>
   );
 }

@@ -2,6 +2,7 @@
 // The notice says what happened; closing it takes the parameter out of the address.
 import { useSearchParams } from 'react-router-dom';
 import { SignInLink, signInNoticeParam } from './sign-in-link';
+import { CrossGlyph } from '../../../components/ui/glyph';
 
 const notices = {
   failed: {
@@ -52,14 +53,7 @@ export function SignInNotice() {
           title="Dismiss"
           className="inline-grid size-7 place-items-center rounded-md text-ink-muted hover:bg-raised hover:text-ink"
         >
-          <svg viewBox="0 0 12 12" width="12" height="12" aria-hidden="true">
-            <path
-              d="M2.5 2.5l7 7M9.5 2.5l-7 7"
-              stroke="currentColor"
-              strokeWidth="1.5"
-              strokeLinecap="round"
-            />
-          </svg>
+          <CrossGlyph size={12} />
         </button>
       </div>
     </div>

@@ -16,6 +16,7 @@ import {
   type CaseAttachment,
 } from '../api/get-attachments';
 import { useUploadAttachments } from '../api/upload-attachments';
+import { CrossGlyph } from '../../../components/ui/glyph';
 
 // What the API keeps (apps/api/src/modules/attachments/README.md): the type is read from the bytes,
 // so this only narrows the file dialog.
@@ -82,14 +83,7 @@ function Tile({
           title="Remove"
           className="absolute top-1.5 right-1.5 inline-grid size-6 place-items-center rounded bg-surface/90 text-ink-muted opacity-0 ring-1 ring-line group-hover:opacity-100 hover:text-danger focus-visible:opacity-100"
         >
-          <svg viewBox="0 0 12 12" width="10" height="10" aria-hidden="true">
-            <path
-              d="M2.5 2.5l7 7M9.5 2.5l-7 7"
-              stroke="currentColor"
-              strokeWidth="1.5"
-              strokeLinecap="round"
-            />
-          </svg>
+          <CrossGlyph size={10} />
         </button>
       )}
     </li>

@@ -7,6 +7,7 @@ import { formatVolts } from '../../../lib/quantity-format';
 import { partError, type FieldErrors, type PartRow } from '../case-form';
 import { CulpritGlyph } from './case-marks';
 import { NameCombobox } from './name-combobox';
+import { CrossGlyph } from '../../../components/ui/glyph';
 
 function RemoveButton({ label, onClick }: { label: string; onClick: () => void }) {
   return (
@@ -17,14 +18,7 @@ function RemoveButton({ label, onClick }: { label: string; onClick: () => void }
       title="Remove"
       className="inline-grid size-5 place-items-center rounded text-ink-muted hover:bg-raised hover:text-danger"
     >
-      <svg viewBox="0 0 12 12" width="9" height="9" aria-hidden="true">
-        <path
-          d="M2.5 2.5l7 7M9.5 2.5l-7 7"
-          stroke="currentColor"
-          strokeWidth="1.5"
-          strokeLinecap="round"
-        />
-      </svg>
+      <CrossGlyph size={9} />
     </button>
   );
 }

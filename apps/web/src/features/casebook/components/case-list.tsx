@@ -27,6 +27,7 @@ import {
 import { CaseRow } from './case-row';
 import { NameCombobox } from './name-combobox';
 import { OutcomeGlyph } from './outcome-badge';
+import { CrossGlyph } from '../../../components/ui/glyph';
 
 const typingPause = 300;
 
@@ -53,14 +54,7 @@ function FilterChip({
         title="Remove this filter"
         className="-mr-1 inline-grid size-5 place-items-center rounded text-ink-muted hover:bg-raised hover:text-ink"
       >
-        <svg viewBox="0 0 12 12" width="10" height="10" aria-hidden="true">
-          <path
-            d="M2.5 2.5l7 7M9.5 2.5l-7 7"
-            stroke="currentColor"
-            strokeWidth="1.5"
-            strokeLinecap="round"
-          />
-        </svg>
+        <CrossGlyph size={10} />
       </button>
     </span>
   );

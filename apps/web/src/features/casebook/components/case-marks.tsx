@@ -2,6 +2,7 @@
 // chips for nets and culprit parts.
 import type { CaseScore } from '@railyard/shared';
 import { Link } from 'react-router-dom';
+import { StrokeGlyph } from '../../../components/ui/glyph';
 import { paths } from '../../../config/paths';
 import { formatCount } from '../../../lib/quantity-format';
 
@@ -23,21 +24,10 @@ export function DownGlyph({ size = 10 }: { size?: number }) {
 
 export function ConfirmGlyph({ size = 11 }: { size?: number }) {
   return (
-    <svg
-      viewBox="0 0 12 12"
-      width={size}
-      height={size}
-      aria-hidden="true"
-      className="shrink-0"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth="1.5"
-      strokeLinecap="round"
-      strokeLinejoin="round"
-    >
+    <StrokeGlyph size={size}>
       <rect x="1.5" y="1.5" width="9" height="9" rx="2" />
       <path d="M3.8 6.2 5.4 7.8 8.4 4.4" />
-    </svg>
+    </StrokeGlyph>
   );
 }
 

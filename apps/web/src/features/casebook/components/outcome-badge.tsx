@@ -1,6 +1,8 @@
 // How a repair ended, as a badge: the word and a glyph carry it, the tone only repeats it, so the
 // three stay apart for colour-blind readers and on a dim bench monitor.
 import type { CaseOutcome, CaseStatus } from '@railyard/shared';
+import { Badge } from '../../../components/ui/badge';
+import { StrokeGlyph } from '../../../components/ui/glyph';
 import { outcomeHint, outcomeLabel } from '../case-vocabulary';
 
 const outcomeTone: Record<CaseOutcome, string> = {
@@ -11,18 +13,7 @@ const outcomeTone: Record<CaseOutcome, string> = {
 
 export function OutcomeGlyph({ outcome, size = 11 }: { outcome: CaseOutcome; size?: number }) {
   return (
-    <svg
-      viewBox="0 0 12 12"
-      width={size}
-      height={size}
-      aria-hidden="true"
-      className="shrink-0"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth="1.6"
-      strokeLinecap="round"
-      strokeLinejoin="round"
-    >
+    <StrokeGlyph size={size} strokeWidth={1.6}>
       {outcome === 'solved' && <path d="M2.2 6.4 4.8 9 9.8 3.2" />}
       {outcome === 'partly' && (
         <>
@@ -31,19 +22,16 @@ export function OutcomeGlyph({ outcome, size = 11 }: { outcome: CaseOutcome; siz
         </>
       )}
       {outcome === 'not_solved' && <path d="M3 3l6 6M9 3 3 9" />}
-    </svg>
+    </StrokeGlyph>
   );
 }
 
 export function OutcomeBadge({ outcome }: { outcome: CaseOutcome }) {
   return (
-    <span
-      title={outcomeHint[outcome]}
-      className={`inline-flex h-5 shrink-0 items-center gap-1 rounded border px-1.5 text-[11.5px] leading-none font-medium whitespace-nowrap ${outcomeTone[outcome]}`}
-    >
+    <Badge tone={outcomeTone[outcome]} title={outcomeHint[outcome]}>
       <OutcomeGlyph outcome={outcome} />
       {outcomeLabel[outcome]}
-    </span>
+    </Badge>
   );
 }
 

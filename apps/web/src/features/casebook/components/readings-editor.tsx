@@ -16,6 +16,7 @@ import {
   readingUnit,
 } from '../reading-format';
 import { NameCombobox } from './name-combobox';
+import { CrossGlyph } from '../../../components/ui/glyph';
 
 // One line per reading from md up; on a narrow screen net and mode take a line each, the two
 // values share one, and the difference sits under them.
@@ -185,14 +186,7 @@ function ReadingRowEditor({
           title="Remove this reading"
           className="inline-grid size-8 place-items-center justify-self-end rounded-md text-ink-muted hover:bg-raised hover:text-danger"
         >
-          <svg viewBox="0 0 12 12" width="11" height="11" aria-hidden="true">
-            <path
-              d="M2.5 2.5l7 7M9.5 2.5l-7 7"
-              stroke="currentColor"
-              strokeWidth="1.5"
-              strokeLinecap="round"
-            />
-          </svg>
+          <CrossGlyph size={11} />
         </button>
       </div>
       {rowErrors.length > 0 && (
