@@ -93,20 +93,10 @@ export function CulpritChip({ refdes, title }: { refdes: string; title?: string 
 /** A crossed part outline: "this part was at fault". */
 export function CulpritGlyph({ size = 10 }: { size?: number }) {
   return (
-    <svg
-      viewBox="0 0 10 10"
-      width={size}
-      height={size}
-      aria-hidden="true"
-      className="shrink-0"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth="1.4"
-      strokeLinecap="round"
-    >
-      <rect x="1" y="2.5" width="8" height="5" rx="1" />
-      <path d="M2.5 1 7.5 9" />
-    </svg>
+    <StrokeGlyph size={size} strokeWidth={1.7}>
+      <rect x="1.2" y="3" width="9.6" height="6" rx="1.2" />
+      <path d="M3 1.2 9 10.8" />
+    </StrokeGlyph>
   );
 }
 
