@@ -7,6 +7,7 @@ import type { AddressInfo } from 'node:net';
 import { createApp } from '../../apps/api/src/app';
 import { readEnv } from '../../apps/api/src/config/env';
 import { createPool } from '../../apps/api/src/db/client';
+import { createHttpServer } from '../../apps/api/src/lib/http-server';
 import { createLogger } from '../../apps/api/src/lib/logger';
 
 const env = readEnv({
@@ -20,7 +21,7 @@ const env = readEnv({
 });
 const pool = createPool(env.DATABASE_URL);
 const app = createApp({ env, pool, logger: createLogger('warn') });
-const server = app.listen(0, '127.0.0.1', () => {
+const server = createHttpServer(app).listen(0, '127.0.0.1', () => {
   console.log(`listening ${(server.address() as AddressInfo).port}`);
 });
 process.on('SIGTERM', () => server.close(() => void app.shutdown().then(() => pool.end())));

@@ -9,6 +9,7 @@ import request from 'supertest';
 import type { UserRole } from '@railyard/shared';
 import { createApp } from '../../apps/api/src/app';
 import { readEnv, type Env } from '../../apps/api/src/config/env';
+import { createHttpServer } from '../../apps/api/src/lib/http-server';
 import { createLogger } from '../../apps/api/src/lib/logger';
 
 export function testEnv(overrides: Partial<Env> = {}): Env {
@@ -46,7 +47,7 @@ export async function createTestApp(overrides: Partial<Env> = {}): Promise<TestA
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5 });
   const app = createApp({ env, pool, logger: createLogger('silent') });
   const server = await new Promise<Server>((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
+    const s = createHttpServer(app).listen(0, '127.0.0.1', () => resolve(s));
   });
   const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   const test: TestApp = {

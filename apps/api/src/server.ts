@@ -1,6 +1,7 @@
 import { readEnv } from './config/env';
 import { createApp } from './app';
 import { createPool } from './db/client';
+import { createHttpServer } from './lib/http-server';
 import { createLogger } from './lib/logger';
 
 const env = readEnv();
@@ -8,7 +9,7 @@ const logger = createLogger(env.LOG_LEVEL);
 const pool = createPool(env.DATABASE_URL);
 const app = createApp({ env, pool, logger });
 
-const server = app.listen(env.PORT, env.HOST, () => {
+const server = createHttpServer(app).listen(env.PORT, env.HOST, () => {
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : env.PORT;
   logger.info({ port }, 'Railyard API listening');
