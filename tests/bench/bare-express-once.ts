@@ -1,6 +1,7 @@
-// The floor for the tree endpoint's benchmark: a bare Express app, nothing but one route, sending the same
-// JSON bytes the API sent for the trace (read from the file named on the command line). Whatever latency
-// this shows at 50 connections is the machine's and Express's, not Railyard's. Prints "listening <port>".
+// For comparison in the tree endpoint's benchmark: a bare Express app, nothing but one route, served the
+// usual way (`app.listen`, so Express changes each request's prototype; see apps/api/src/lib/http-server.ts),
+// sending the same JSON bytes the API sent for the trace (read from the file named on the command line).
+// Prints "listening <port>".
 import { readFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import express from 'express';

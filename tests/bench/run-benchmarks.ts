@@ -84,12 +84,28 @@ async function serverBenches(work: string, laptopSlug: string): Promise<BenchSec
     };
     const treeJson = path.join(work, 'laptop-tree.json');
     writeFileSync(treeJson, text);
-    const floor = await startBenchServer(root, process.env, ['tests/bench/bare-express-once.ts', treeJson]);
+    const floor = await startBenchServer(root, process.env, [
+      'tests/bench/bare-node-once.ts',
+      treeJson,
+    ]);
+    const plainExpress = await startBenchServer(root, process.env, [
+      'tests/bench/bare-express-once.ts',
+      treeJson,
+    ]);
     let sections: BenchSection[];
     try {
-      sections = [await treeEndpointBench(server.url, laptopSlug, treeSize, `${floor.url}/tree`)];
+      sections = [
+        await treeEndpointBench(
+          server.url,
+          laptopSlug,
+          treeSize,
+          `${floor.url}/tree`,
+          `${plainExpress.url}/tree`,
+        ),
+      ];
     } finally {
       await floor.stop();
+      await plainExpress.stop();
     }
     const browser = await launchBrowser();
     try {
