@@ -111,17 +111,61 @@ function bigramCandidates(
   return passing;
 }
 
+/** How often each character occurs in each record: one row of `columns.size` counts per record. */
+type CharacterTable = { columns: ReadonlyMap<string, number>; counts: Uint8Array };
+
+function characterTable(keys: readonly string[]): CharacterTable {
+  const columns = new Map<string, number>();
+  for (const key of keys)
+    for (const char of key) if (!columns.has(char)) columns.set(char, columns.size);
+  const counts = new Uint8Array(keys.length * columns.size);
+  keys.forEach((key, at) => {
+    for (const char of key) {
+      const cell = at * columns.size + (columns.get(char) as number);
+      counts[cell] = Math.min(255, (counts[cell] ?? 0) + 1);
+    }
+  });
+  return { columns, counts };
+}
+
+/**
+ * A test for the q-gram lemma with q = 1: text within k edits of a pattern of length m holds at least
+ * m − k of the pattern's characters (each edit costs the pattern at most one of them), counted as a
+ * multiset. For the short texts typed here it is the strongest of the three filters: "VDDMEM" with
+ * k = 2 asks for 4 of its six characters, while the two-character bound asks for one piece.
+ */
+function holdsEnoughCharacters(needle: string, errors: number, table: CharacterTable) {
+  const wanted = new Map<number, number>();
+  for (const char of needle) {
+    const column = table.columns.get(char);
+    if (column !== undefined) wanted.set(column, (wanted.get(column) ?? 0) + 1);
+  }
+  const needed = needle.length - errors;
+  const width = table.columns.size;
+  return (record: number) => {
+    let held = 0;
+    for (const [column, times] of wanted)
+      held += Math.min(times, table.counts[record * width + column] ?? 0);
+    return held >= needed;
+  };
+}
+
 /**
  * `count` consecutive pieces of `text` for the pigeonhole filter. Any cut works; the one chosen makes
  * the pieces rare in the board's names (`howMany` estimates how many names hold a piece), since one
  * common piece — a lone `V` — lets nearly every name through. Even pieces when there are too many
  * cuts to weigh.
  */
-function splitIntoPieces(text: string, count: number, howMany: (piece: string) => number): string[] {
+function splitIntoPieces(
+  text: string,
+  count: number,
+  howMany: (piece: string) => number,
+): string[] {
   const even = () => {
     const pieces: string[] = [];
     const size = text.length / count;
-    for (let i = 0; i < count; i++) pieces.push(text.slice(Math.round(i * size), Math.round((i + 1) * size)));
+    for (let i = 0; i < count; i++)
+      pieces.push(text.slice(Math.round(i * size), Math.round((i + 1) * size)));
     return pieces.filter((piece) => piece !== '');
   };
   if (count <= 1 || text.length > 12) return even();
@@ -168,6 +212,7 @@ export function buildRailIndex(nets: readonly NetRow[]): RailIndex {
     }
   });
   const gramCounts = new Uint16Array(records.length);
+  const characters = characterTable(records.map((record) => record.key));
   const charCounts = new Map<string, number>();
   for (const record of records) {
     for (const char of new Set(record.key)) charCounts.set(char, (charCounts.get(char) ?? 0) + 1);
@@ -175,7 +220,8 @@ export function buildRailIndex(nets: readonly NetRow[]): RailIndex {
   // at most the names holding the piece's rarest character or two-character piece
   const howMany = (piece: string) => {
     let fewest = Math.min(...[...piece].map((char) => charCounts.get(char) ?? 0));
-    for (let i = 0; i + 2 <= piece.length; i++) fewest = Math.min(fewest, postings.get(piece.slice(i, i + 2))?.length ?? 0);
+    for (let i = 0; i + 2 <= piece.length; i++)
+      fewest = Math.min(fewest, postings.get(piece.slice(i, i + 2))?.length ?? 0);
     return fewest;
   };
 
@@ -195,17 +241,23 @@ export function buildRailIndex(nets: readonly NetRow[]): RailIndex {
       } else {
         // Only names that can be within the error budget go to fuse.js, so it scores tens of names
         // instead of thousands: those holding enough of the text's two-character pieces (q-gram
-        // lemma, when the text is long enough for that bound to say something) and one of k + 1
-        // pieces of it unchanged (pigeonhole: k errors cannot touch all k + 1).
+        // lemma, when the text is long enough for that bound to say something), one of k + 1
+        // pieces of it unchanged (pigeonhole: k errors cannot touch all k + 1), and enough of its
+        // characters (the same lemma for single characters). Each is necessary, so none loses a match.
         const budget = Math.floor(railMatchThreshold * needle.length);
         const byGrams = bigramCandidates(needle, budget, postings, gramCounts);
         const pieces = splitIntoPieces(needle, budget + 1, howMany);
-        const holdsPiece = (record: RailRecord) => pieces.some((piece) => record.key.includes(piece));
-        const candidates = byGrams
-          ? byGrams.map((at) => records[at] as RailRecord).filter(holdsPiece)
-          : records.filter(holdsPiece);
+        const holdsPiece = (at: number) =>
+          pieces.some((piece) => (records[at] as RailRecord).key.includes(piece));
+        const enoughCharacters = holdsEnoughCharacters(needle, budget, characters);
+        const candidates = (byGrams ?? records.map((_record, at) => at))
+          .filter((at) => holdsPiece(at) && enoughCharacters(at))
+          .map((at) => records[at] as RailRecord);
         // building a fuse.js index for most of the board costs more than searching the whole one
-        hits = candidates.length * 2 > records.length ? fuse.search(needle) : new Fuse(candidates, fuseOptions).search(needle);
+        hits =
+          candidates.length * 2 > records.length
+            ? fuse.search(needle)
+            : new Fuse(candidates, fuseOptions).search(needle);
       }
       const bestPerNet = new Map<string, Candidate>();
       for (const { item, score = 0 } of hits) {
