@@ -2,6 +2,7 @@ import { crc32 } from 'node:zlib';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
 import { describe, expect, it } from 'vitest';
+import { samplePdf } from '../../../../../tests/support/sample-files';
 import { AppError } from '../../lib/app-error';
 import { prepareAttachment } from './attachment-content';
 
@@ -82,25 +83,6 @@ function zipWith(name: string, content: Buffer): Buffer {
   end.writeUInt32LE(46 + n.length, 12);
   end.writeUInt32LE(30 + n.length + content.length, 16);
   return Buffer.concat([local, n, content, central, n, end]);
-}
-
-/** The smallest well-formed PDF: catalog, page tree, one empty page, xref table (ISO 32000-1 §7.5). */
-function tinyPdf(): Buffer {
-  const objects = [
-    '<< /Type /Catalog /Pages 2 0 R >>',
-    '<< /Type /Pages /Kids [3 0 R] /Count 1 >>',
-    '<< /Type /Page /Parent 2 0 R /MediaBox [0 0 200 100] >>',
-  ];
-  let body = '%PDF-1.4\n';
-  const offsets: number[] = [];
-  objects.forEach((o, i) => {
-    offsets.push(body.length);
-    body += `${i + 1} 0 obj\n${o}\nendobj\n`;
-  });
-  const xref = body.length;
-  body += `xref\n0 ${objects.length + 1}\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, '0')} 00000 n \n`).join('')}`;
-  body += `trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
-  return Buffer.from(body, 'latin1');
 }
 
 async function refusal(promise: Promise<unknown>): Promise<AppError> {
@@ -209,7 +191,7 @@ describe('prepareAttachment', () => {
   });
 
   it('keeps a PDF as uploaded and makes no thumbnail for it', async () => {
-    const pdf = tinyPdf();
+    const pdf = samplePdf();
     const prepared = await prepareAttachment({ name: 'ldo-datasheet.pdf', bytes: pdf });
     expect(prepared).toMatchObject({
       contentType: 'application/pdf',
