@@ -1,6 +1,6 @@
 // A moderator folds a duplicate case into the case it repeats, and an admin can take the merge back
 // through its audit row. Every row is counted before and after: a merge moves rows, it deletes none.
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Response } from 'supertest';
@@ -564,10 +564,11 @@ describe('refused merges', () => {
     expect(writes.attach.body.error.message).toBe(`Case ${s.A} was merged into case ${s.B}: attach files there`);
   });
 
-  it('makes a vote or comment sent while the merge runs wait for it, then refuses it', async () => {
+  it('makes a vote, comment or attachment sent while the merge runs wait for it, then refuses it', async () => {
     const s = await duplicatePair();
     const member = await t.agentAs('member');
     const before = await idsOf(s.A);
+    const filesBefore = await readdir(attachmentsDir, { recursive: true });
     // Stands in for a merge in progress: holds the duplicate's row as the merge does (FOR UPDATE) and
     // marks it merged, so the writes pass the service's first check and meet the lock.
     const merging = await t.pool.connect();
@@ -577,7 +578,11 @@ describe('refused merges', () => {
       await merging.query('UPDATE cases SET merged_into_id = $2 WHERE id = $1', [s.A, s.B]);
       const vote = member.put(`/api/cases/${s.A}/vote`).send({ value: 1 }).then((r) => r);
       const comment = member.post(`/api/cases/${s.A}/comments`).send({ body: 'Sent as it merged' }).then((r) => r);
-      // both are waiting on the row lock
+      const upload = s.authorA
+        .post(`/api/cases/${s.A}/attachments`)
+        .attach('files', samplePdf(), 'sent as it merged.pdf')
+        .then((r) => r);
+      // all three are waiting on the row lock
       await expect
         .poll(async () => {
           const { rows } = await t.pool.query<{ waiting: number }>(
@@ -585,19 +590,23 @@ describe('refused merges', () => {
           );
           return rows[0]!.waiting;
         })
-        .toBeGreaterThanOrEqual(2);
+        .toBeGreaterThanOrEqual(3);
       await merging.query('COMMIT');
 
-      for (const res of [await vote, await comment]) {
+      for (const res of [await vote, await comment, await upload]) {
         expect(res.status, JSON.stringify(res.body)).toBe(409);
         expect(res.body.error.code).toBe('case_merged');
       }
+      expect((await upload).body.error.message).toBe(`Case ${s.A} was merged into case ${s.B}: attach files there`);
     } finally {
       merging.release();
     }
     const after = await idsOf(s.A);
     expect(after.votes).toEqual(before.votes);
     expect(after.comments).toEqual(before.comments);
+    expect(after.attachments).toEqual(before.attachments);
+    // the refused upload's stored files are removed again
+    expect((await readdir(attachmentsDir, { recursive: true })).sort()).toEqual(filesBefore.sort());
   });
 });
 

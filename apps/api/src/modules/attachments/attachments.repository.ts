@@ -4,6 +4,7 @@ import { asc, eq } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { caseAttachments } from '../../db/schema/attachments';
 import { cases } from '../../db/schema/casebook';
+import { lockUnmergedCase } from '../casebook/casebook.repository';
 
 export type AttachmentRow = typeof caseAttachments.$inferSelect;
 export type NewAttachmentRow = typeof caseAttachments.$inferInsert;
@@ -30,9 +31,15 @@ export function createAttachmentsRepository(db: Database) {
       return rows[0] ?? null;
     },
 
-    /** All rows of one upload in one transaction: either every file of it is listed or none. */
-    async insertMany(rows: NewAttachmentRow[]): Promise<AttachmentRow[]> {
-      return db.transaction(async (tx) => tx.insert(caseAttachments).values(rows).returning());
+    /**
+     * All rows of one upload in one transaction: either every file of it is listed or none. The case row
+     * is share-locked first, so an upload meeting a merge of its case waits for it and is then refused.
+     */
+    async insertMany(caseId: number, rows: NewAttachmentRow[]): Promise<AttachmentRow[]> {
+      return db.transaction(async (tx) => {
+        await lockUnmergedCase(tx, caseId, 'key share', 'attach files there');
+        return tx.insert(caseAttachments).values(rows).returning();
+      });
     },
 
     async listForCase(caseId: number): Promise<AttachmentRow[]> {

@@ -153,6 +153,7 @@ export function createAttachmentsService(deps: {
       const { keyed, stored } = await store(prepared);
       try {
         const rows = await repo.insertMany(
+          caseId,
           keyed.map((k) => ({
             caseId,
             uploaderId: actor.id,

@@ -272,10 +272,16 @@ async function rescore(tx: Tx, caseId: number, scorer: CaseScorer) {
  */
 /**
  * Locks the case row for a change to what hangs off it and refuses a case merged away meanwhile: a merge
- * holds the row FOR UPDATE, so a vote or comment sent in the same instant waits for it and then finds
- * the case merged instead of landing on it after its rows moved.
+ * holds the row FOR UPDATE, so a vote, comment or attachment sent in the same instant waits for it and
+ * then finds the case merged instead of landing on it after its rows moved.
  */
-async function lockUnmergedCase(tx: Tx, caseId: number, lock: 'no key update' | 'key share') {
+export async function lockUnmergedCase(
+  tx: Tx,
+  caseId: number,
+  lock: 'no key update' | 'key share',
+  /** what to tell the caller to do on the kept case instead */
+  instead = 'make changes there',
+) {
   const result = await tx.execute<{ merged_into_id: number | null }>(
     lock === 'no key update'
       ? sql`SELECT merged_into_id FROM cases WHERE id = ${caseId} FOR NO KEY UPDATE`
@@ -283,7 +289,7 @@ async function lockUnmergedCase(tx: Tx, caseId: number, lock: 'no key update' | 
   );
   const mergedInto = result.rows[0]?.merged_into_id ?? null;
   if (mergedInto !== null) {
-    throw new AppError(409, 'case_merged', `Case ${caseId} was merged into case ${mergedInto}: make changes there`, {
+    throw new AppError(409, 'case_merged', `Case ${caseId} was merged into case ${mergedInto}: ${instead}`, {
       mergedIntoId: mergedInto,
     });
   }
