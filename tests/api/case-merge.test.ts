@@ -149,6 +149,15 @@ async function rowsOf(caseId: number): Promise<Record<CaseTable, number>> {
 }
 
 /** The ids (and, for readings and parts, what an undo must restore) of one case's rows. */
+/** The files under the attachments folder (its shard folders may stay behind, empty). */
+async function storedFiles(): Promise<string[]> {
+  const entries = await readdir(attachmentsDir, { recursive: true, withFileTypes: true });
+  return entries
+    .filter((entry) => entry.isFile())
+    .map((entry) => path.join(entry.parentPath, entry.name))
+    .sort();
+}
+
 async function idsOf(caseId: number) {
   const ids = async (table: string) =>
     (await t.pool.query<{ id: number }>(`SELECT id FROM ${table} WHERE case_id = $1 ORDER BY id`, [caseId])).rows.map((r) => r.id);
@@ -568,7 +577,7 @@ describe('refused merges', () => {
     const s = await duplicatePair();
     const member = await t.agentAs('member');
     const before = await idsOf(s.A);
-    const filesBefore = await readdir(attachmentsDir, { recursive: true });
+    const filesBefore = await storedFiles();
     // Stands in for a merge in progress: holds the duplicate's row as the merge does (FOR UPDATE) and
     // marks it merged, so the writes pass the service's first check and meet the lock.
     const merging = await t.pool.connect();
@@ -606,7 +615,7 @@ describe('refused merges', () => {
     expect(after.comments).toEqual(before.comments);
     expect(after.attachments).toEqual(before.attachments);
     // the refused upload's stored files are removed again
-    expect((await readdir(attachmentsDir, { recursive: true })).sort()).toEqual(filesBefore.sort());
+    expect(await storedFiles()).toEqual(filesBefore);
   });
 });
 
