@@ -1,15 +1,12 @@
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { AnnotationFile, NetDetail, PowerTree, RailSearchResponse } from '@railyard/shared';
+import type { NetDetail, PowerTree, RailSearchResponse } from '@railyard/shared';
+import { demoHandsetAnnotations, importDemoHandset } from '../support/demo-handset';
 import { createTestApp, uniqueSlug, type TestApp } from '../support/test-app';
 
 // The demo handset board: its annotations name the converter and switch links; the importer derives the
 // series links through inductors, ferrites, fuses and 0-ohm links from the netlist.
-const demo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../seed/boards/ostrand-os-m1-5521');
-const annotations = JSON.parse(readFileSync(path.join(demo, 'annotations.json'), 'utf8')) as AnnotationFile;
+const annotations = demoHandsetAnnotations();
 let t: TestApp;
 let app: string;
 let admin: Awaited<ReturnType<TestApp['agentAs']>>;
@@ -18,13 +15,7 @@ const slug = uniqueSlug('tree');
 beforeAll(async () => {
   t = await createTestApp();
   app = t.baseUrl;
-  admin = await t.agentAs('admin');
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .attach('netlist', path.join(demo, 'netlist.ipc'))
-    .attach('parts', path.join(demo, 'parts.csv'))
-    .attach('annotations', path.join(demo, 'annotations.json'));
-  expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
+  admin = await importDemoHandset(t, slug);
 });
 afterAll(() => t.close());
 

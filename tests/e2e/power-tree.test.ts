@@ -1,36 +1,20 @@
 // From the rail search on a board's page to a rail's power tree, and from there through the graph
 // to the next rail, in Debian's Chromium against the real app and its Content Security Policy.
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { AnnotationFile, NetDetail, PowerTree } from '@railyard/shared';
+import type { NetDetail, PowerTree } from '@railyard/shared';
 import { launchBrowser, startWebServer } from '../support/browser';
+import { demoHandsetAnnotations, importDemoHandset } from '../support/demo-handset';
 import { uniqueSlug } from '../support/test-app';
 
-// The demo handset board. Its annotation file is the outside record of which part feeds which rail.
-const demo = path.resolve(
-  path.dirname(fileURLToPath(import.meta.url)),
-  '../../seed/boards/ostrand-os-m1-5521',
-);
-const annotations = JSON.parse(
-  readFileSync(path.join(demo, 'annotations.json'), 'utf8'),
-) as AnnotationFile;
+const annotations = demoHandsetAnnotations();
 const slug = uniqueSlug('handset');
 let web: Awaited<ReturnType<typeof startWebServer>>;
 let browser: Browser;
 
 beforeAll(async () => {
   web = await startWebServer();
-  const admin = await web.agentAs('admin');
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('board', JSON.stringify({ title: `Handset ${slug}`, deviceFamily: 'Demo handsets' }))
-    .attach('netlist', path.join(demo, 'netlist.ipc'))
-    .attach('parts', path.join(demo, 'parts.csv'))
-    .attach('annotations', path.join(demo, 'annotations.json'));
-  expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
+  await importDemoHandset(web, slug, { title: `Handset ${slug}`, deviceFamily: 'Demo handsets' });
   browser = await launchBrowser();
 });
 
