@@ -30,6 +30,7 @@ const WORKSPACES = [
   'packages/shared',
   'packages/board-analysis',
   'packages/vote-ranking',
+  'packages/injection-power',
   'apps/api',
   'apps/web',
   'tests',

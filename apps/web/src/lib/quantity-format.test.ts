@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatFarads } from './quantity-format';
+import { formatFarads, formatSi } from './quantity-format';
 
 describe('capacitance format', () => {
   // IEC 60062 check values (shared/reference/FACTS.md §2): 4n7 = 4.7 nF, 4p7 = 4.7 pF,
@@ -26,5 +26,29 @@ describe('capacitance format', () => {
   it('writes zero as 0 F and leaves a value that is not a number blank', () => {
     expect(formatFarads(0)).toBe('0 F');
     expect(formatFarads(Number.NaN)).toBe('');
+  });
+});
+
+// Prefixes from the BIPM SI Brochure, 9th ed., table 7.
+describe('SI quantity format', () => {
+  it('writes each quantity in the largest prefix that keeps it at 1 or more', () => {
+    expect(formatSi(0.5, 'A')).toBe('500 mA');
+    expect(formatSi(2, 'A')).toBe('2 A');
+    expect(formatSi(0.05, 'Ω')).toBe('50 mΩ');
+    expect(formatSi(4700, 'Ω')).toBe('4.7 kΩ');
+    expect(formatSi(2.2e6, 'Ω')).toBe('2.2 MΩ');
+    expect(formatSi(0.45, 'W')).toBe('450 mW');
+    expect(formatSi(4.95, 'W')).toBe('4.95 W');
+  });
+
+  it('keeps three significant digits and moves up a prefix when rounding reaches a thousand', () => {
+    expect(formatSi(1 / 3, 'A')).toBe('333 mA');
+    expect(formatSi(0.9996, 'W')).toBe('1 W');
+    expect(formatSi(0.1 + 0.2, 'V')).toBe('300 mV');
+  });
+
+  it('writes zero without a prefix and a negative value with the minus sign', () => {
+    expect(formatSi(0, 'W')).toBe('0 W');
+    expect(formatSi(-1.8, 'V')).toBe('\u22121.8 V');
   });
 });

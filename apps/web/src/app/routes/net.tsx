@@ -90,7 +90,8 @@ export default function NetRoute() {
           <SectionErrorBoundary title="Could not show the cases" resetKeys={[slug, net.name]}>
             <NetCasesPanel slug={slug} net={net.name} />
           </SectionErrorBoundary>
-          <InjectionCaution nominalVoltage={net.nominalVoltage} />
+          {/* Keyed by net: a resistance typed for one rail is not carried to the next. */}
+          <InjectionCaution key={net.name} nominalVoltage={net.nominalVoltage} />
           <PowerLinksPanel slug={slug} linksIn={detail.linksIn} linksOut={detail.linksOut} />
         </div>
         {canEdit && (

@@ -58,6 +58,22 @@ export function TextInput(props: InputHTMLAttributes<HTMLInputElement>) {
   );
 }
 
+/** A text input with its unit ("V", "A", "Ω") written inside it at the right. */
+export function UnitInput({
+  unit,
+  className,
+  ...props
+}: InputHTMLAttributes<HTMLInputElement> & { unit: string }) {
+  return (
+    <div className="relative">
+      <TextInput {...props} className={`pr-7 font-mono ${className ?? ''}`} />
+      <span className="pointer-events-none absolute top-1/2 right-2.5 -translate-y-1/2 text-[13px] text-ink-faint">
+        {unit}
+      </span>
+    </div>
+  );
+}
+
 export function TextArea(props: TextareaHTMLAttributes<HTMLTextAreaElement>) {
   return <textarea {...props} className={`${controlClass} py-1.5 ${props.className ?? ''}`} />;
 }

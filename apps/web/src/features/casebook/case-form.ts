@@ -11,7 +11,7 @@ import {
   type CaseUpdate,
   type ReadingMode,
 } from '@railyard/shared';
-import { readMeterValue } from './meter-value';
+import { readMeterValue } from '../../lib/meter-value';
 import { readMinutes } from './time-spent';
 
 export type ReadingRow = {

@@ -6,7 +6,7 @@ import { controlClass, Select } from '../../../components/ui/field';
 import { NetKindGlyph } from '../../../components/ui/net-kind-badge';
 import { formatVolts } from '../../../lib/quantity-format';
 import { newReadingRow, type FieldErrors, type ReadingRow } from '../case-form';
-import { readMeterValue } from '../meter-value';
+import { readMeterValue } from '../../../lib/meter-value';
 import {
   formatDifference,
   isMarkedDifference,

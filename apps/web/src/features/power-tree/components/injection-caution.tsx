@@ -1,6 +1,7 @@
 // The net page leads to a hands-on step: feeding current into a shorted rail to find the part
 // that warms up. Common practice, stated where the technician is about to do it.
 import { formatVolts } from '../../../lib/quantity-format';
+import { InjectionPlanner } from './injection-planner';
 
 export function InjectionCaution({ nominalVoltage }: { nominalVoltage: number | null }) {
   const ceiling =
@@ -22,6 +23,7 @@ export function InjectionCaution({ nominalVoltage }: { nominalVoltage: number | 
         A MOSFET or load switch in front of a shorted line may heat first without being the faulty
         part: the fault is further down the line.
       </p>
+      <InjectionPlanner railVolts={nominalVoltage} />
     </aside>
   );
 }

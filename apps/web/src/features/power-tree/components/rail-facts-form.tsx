@@ -4,7 +4,7 @@ import type { NetKind, NetRow, NetUpdate } from '@railyard/shared';
 import { useState, type FormEvent } from 'react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
-import { Field, Select, TextArea, TextInput } from '../../../components/ui/field';
+import { Field, Select, TextArea, UnitInput } from '../../../components/ui/field';
 import { netKindLabel, netKindOrder } from '../../../components/ui/net-kind-badge';
 import { ReasonField } from '../../../components/ui/reason-field';
 import { isApiError } from '../../../lib/api-client';
@@ -71,24 +71,19 @@ export function RailFactsForm({ slug, net }: { slug: string; net: NetRow }) {
       <div className="grid grid-cols-[7.5rem_minmax(0,1fr)] gap-3">
         <Field label="Nominal voltage" error={errorOf('nominalVoltage')} hint="empty: not known">
           {(control) => (
-            <div className="relative">
-              <TextInput
-                {...control}
-                inputMode="decimal"
-                autoComplete="off"
-                spellCheck={false}
-                value={volts}
-                placeholder="e.g. 3.3"
-                onChange={(event) => {
-                  setVolts(event.target.value);
-                  edited();
-                }}
-                className="pr-6 font-mono"
-              />
-              <span className="pointer-events-none absolute top-1/2 right-2.5 -translate-y-1/2 text-[13px] text-ink-faint">
-                V
-              </span>
-            </div>
+            <UnitInput
+              {...control}
+              unit="V"
+              inputMode="decimal"
+              autoComplete="off"
+              spellCheck={false}
+              value={volts}
+              placeholder="e.g. 3.3"
+              onChange={(event) => {
+                setVolts(event.target.value);
+                edited();
+              }}
+            />
           )}
         </Field>
         <Field label="Kind" error={errorOf('kind')}>

@@ -3,6 +3,9 @@
 // letter stands in for the decimal point. Case matters, as in IEC 60062 and the SI: m is milli, M mega.
 import type { ReadingMode } from '@railyard/shared';
 
+/** What the value measures: a reading mode of a case, or a bench supply's current limit (amps). */
+export type MeterQuantity = ReadingMode | 'current_a';
+
 export type MeterValue = { ok: true; value: number | null } | { ok: false; error: string };
 
 // Far inside what any bench meter shows; the API refuses anything beyond (packages/shared casebook.ts).
@@ -16,18 +19,20 @@ const rkmExponent: Record<string, number> = { L: -3, m: -3, R: 0, r: 0, K: 3, k:
 const plainNumber = /^(\d+(?:\.\d*)?|\.\d+)(?:e([+-]?\d+))?([mkKMG]?)$/;
 const letterCode = /^(\d*)([LmRrKkMG])(\d*)$/;
 
-function hint(mode: ReadingMode): string {
+function hint(mode: MeterQuantity): string {
+  if (mode === 'current_a') return 'e.g. 0.5 or 500m';
   return mode === 'resistance_ohm' ? 'e.g. 38, 1.2k or 4K7' : 'e.g. 0.336';
 }
 
 /** Drops the unit a technician may have typed after the number. */
-function withoutUnit(text: string, mode: ReadingMode): string {
+function withoutUnit(text: string, mode: MeterQuantity): string {
   if (mode === 'resistance_ohm') return text.replace(/(?:Ω|ohms?)$/i, '');
+  if (mode === 'current_a') return text.replace(/A$/, '');
   return text.replace(/[Vv]$/, '');
 }
 
 /** Blank reads as "no value" (null); whether one is required is for the caller to say. */
-export function readMeterValue(raw: string, mode: ReadingMode): MeterValue {
+export function readMeterValue(raw: string, mode: MeterQuantity): MeterValue {
   let text = raw.trim().replace(/\s+/g, '');
   if (text === '') return { ok: true, value: null };
   let negative = false;

@@ -66,4 +66,15 @@ describe('reading a typed meter value', () => {
     expect(readMeterValue('2G', 'resistance_ohm').ok).toBe(false);
     expect(valueOf('1G', 'resistance_ohm')).toBe(1e9);
   });
+
+  it('reads a supply current limit with its unit or an SI prefix (BIPM SI Brochure, table 7)', () => {
+    expect(valueOf('1.5', 'current_a')).toBe(1.5);
+    expect(valueOf('1.5 A', 'current_a')).toBe(1.5);
+    expect(valueOf('500m', 'current_a')).toBe(0.5);
+    expect(valueOf('500 mA', 'current_a')).toBe(0.5);
+    expect(valueOf('0,25', 'current_a')).toBe(0.25);
+    const read = readMeterValue('1R5', 'current_a');
+    expect(read.ok).toBe(false);
+    if (!read.ok) expect(read.error).toMatch(/500m/);
+  });
 });
