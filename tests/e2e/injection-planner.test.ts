@@ -1,19 +1,30 @@
 // The supply planner beside a rail's injection cautions: a technician types a setting and the rail's
 // resistance to ground and reads what the supply will do to the short, in Debian's Chromium.
+import path from 'node:path';
 import type { Browser, Locator } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { NetDetail } from '@railyard/shared';
 import { launchBrowser, startWebServer } from '../support/browser';
-import { importDemoHandset } from '../support/demo-handset';
+import { demoHandsetDir, importDemoHandset } from '../support/demo-handset';
 import { uniqueSlug } from '../support/test-app';
 
 const slug = uniqueSlug('handset');
+// the demo tablet board, for its negative rail HP_VNEG (−1.8 V)
+const tabletSlug = uniqueSlug('tablet');
+const tabletFile = path.join(demoHandsetDir, '../lumbre-ls-io-0930/board.json');
 let web: Awaited<ReturnType<typeof startWebServer>>;
 let browser: Browser;
 
 beforeAll(async () => {
   web = await startWebServer();
-  await importDemoHandset(web, slug, { title: `Handset ${slug}`, deviceFamily: 'Demo handsets' });
+  const admin = await importDemoHandset(web, slug, {
+    title: `Handset ${slug}`,
+    deviceFamily: 'Demo handsets',
+  });
+  const tablet = await admin
+    .post(`/api/boards/${tabletSlug}/imports?wait=true`)
+    .attach('netlist', tabletFile);
+  expect(tablet.status, JSON.stringify(tablet.body).slice(0, 500)).toBe(201);
   browser = await launchBrowser();
 });
 
@@ -22,11 +33,11 @@ afterAll(async () => {
   await web?.stop();
 });
 
-async function openPlanner(net: string): Promise<Locator> {
+async function openPlanner(net: string, board = slug): Promise<Locator> {
   const page = await (
     await browser.newContext({ viewport: { width: 1400, height: 1000 } })
   ).newPage();
-  await page.goto(`${web.baseUrl}/boards/${slug}/nets/${net}`);
+  await page.goto(`${web.baseUrl}/boards/${board}/nets/${net}`);
   const planner = page.getByRole('region', { name: 'What the supply will do' });
   await planner.waitFor();
   return planner;
@@ -97,5 +108,21 @@ describe('the supply planner on a rail’s page', () => {
       .poll(() => shown('the resistance to ground must be a number of 0 Ω or more, not -2'))
       .toBe(true);
     expect(await planner.textContent()).not.toContain('at most');
+  });
+
+  it('gives the size of a negative rail as its ceiling and says the leads go the other way round', async () => {
+    const planner = await openPlanner('HP_VNEG', tabletSlug);
+    const caution = planner.locator('xpath=ancestor::aside[1]');
+
+    expect(await caution.textContent()).toContain('never beyond this rail’s \u22121.80 V');
+    await expect
+      .poll(() => planner.textContent())
+      .toContain('the supply’s positive lead goes to ground and its negative lead to the rail');
+    expect(await planner.getByRole('alert').count()).toBe(0);
+
+    await planner.getByRole('textbox', { name: 'Supply' }).fill('2');
+    await expect
+      .poll(() => planner.getByRole('alert').textContent())
+      .toMatch(/^2\.00 V is above this rail’s 1\.80 V/);
   });
 });

@@ -5,9 +5,11 @@ import { InjectionPlanner } from './injection-planner';
 
 export function InjectionCaution({ nominalVoltage }: { nominalVoltage: number | null }) {
   const ceiling =
-    nominalVoltage !== null && nominalVoltage > 0
-      ? `never above this rail’s ${formatVolts(nominalVoltage)}`
-      : 'never above the rail’s nominal voltage';
+    nominalVoltage === null || nominalVoltage === 0
+      ? 'never above the rail’s nominal voltage'
+      : nominalVoltage > 0
+        ? `never above this rail’s ${formatVolts(nominalVoltage)}`
+        : `never beyond this rail’s ${formatVolts(nominalVoltage)}`;
   return (
     <aside
       aria-label="Before injecting current"
