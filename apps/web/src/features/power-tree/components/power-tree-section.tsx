@@ -5,6 +5,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { lazy, Suspense, useCallback, useMemo, useRef, useState } from 'react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
+import { ToggleButton } from '../../../components/ui/toggle-button';
 import { formatCount } from '../../../lib/quantity-format';
 import { powerTreeQueryOptions, usePowerTree, type TreeSource } from '../api/get-power-tree';
 import {
@@ -42,37 +43,6 @@ function GraphPlaceholder({ text }: { text: string }) {
     <div className="absolute inset-0 grid place-items-center" aria-busy="true">
       <p className="animate-pulse text-[13px] text-ink-muted">{text}</p>
     </div>
-  );
-}
-
-function ViewButton({
-  pressed,
-  onClick,
-  disabled,
-  title,
-  children,
-}: {
-  pressed: boolean;
-  onClick: () => void;
-  disabled?: boolean;
-  title?: string;
-  children: string;
-}) {
-  return (
-    <button
-      type="button"
-      aria-pressed={pressed}
-      disabled={disabled}
-      title={title}
-      onClick={onClick}
-      className={`inline-flex h-7 items-center rounded-md border px-2 text-[13px] disabled:cursor-not-allowed disabled:opacity-50 ${
-        pressed
-          ? 'border-line-strong bg-raised text-ink'
-          : 'border-line text-ink-muted hover:text-ink'
-      }`}
-    >
-      {children}
-    </button>
   );
 }
 
@@ -207,20 +177,20 @@ export function PowerTreeSection({ slug, detail, onOpenRail }: PowerTreeSectionP
           Power tree
         </h2>
         <div role="group" aria-label="Trace to draw" className="flex flex-wrap gap-1">
-          <ViewButton
+          <ToggleButton
             pressed={view === 'root'}
             onClick={() => setView('root')}
             disabled={!rootNet}
             title={rootNet ? undefined : 'This board has no root net set'}
           >
             {rootNet ? `Down from ${rootNet}` : 'Down from the root'}
-          </ViewButton>
-          <ViewButton pressed={view === 'down'} onClick={() => setView('down')}>
+          </ToggleButton>
+          <ToggleButton pressed={view === 'down'} onClick={() => setView('down')}>
             What this rail feeds
-          </ViewButton>
-          <ViewButton pressed={view === 'up'} onClick={() => setView('up')}>
+          </ToggleButton>
+          <ToggleButton pressed={view === 'up'} onClick={() => setView('up')}>
             What feeds it
-          </ViewButton>
+          </ToggleButton>
         </div>
         <label className="inline-flex items-center gap-1.5 text-[13px] text-ink-muted">
           <input
