@@ -18,3 +18,4 @@ export * from './carry-over-annotations';
 export * from './power-graph';
 export * from './rail-loads';
 export * from './coupled-groups';
+export * from './placement';

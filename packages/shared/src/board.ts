@@ -164,7 +164,12 @@ export const componentDetailSchema = z.object({
   component: componentRowSchema.omit({ pins: true }).extend({ pins: z.array(componentPinSchema) }),
   /** the power links that pass through the part (it is the converter, switch or series part between them) */
   powerLinks: z.array(
-    z.object({ from: z.string(), to: z.string(), kind: powerLinkKindSchema, origin: powerLinkOriginSchema }),
+    z.object({
+      from: z.string(),
+      to: z.string(),
+      kind: powerLinkKindSchema,
+      origin: powerLinkOriginSchema,
+    }),
   ),
   casebook: z.object({
     /** published cases, neither hidden nor merged away, that name the part */
@@ -174,3 +179,32 @@ export const componentDetailSchema = z.object({
   }),
 });
 export type ComponentDetail = z.infer<typeof componentDetailSchema>;
+
+/** A rectangle on the board, millimetres, x to the right and y up as in the netlist. */
+export const boardBoxSchema = z.object({
+  x0: z.number(),
+  y0: z.number(),
+  x1: z.number(),
+  y1: z.number(),
+});
+export type BoardBox = z.infer<typeof boardBoxSchema>;
+
+/**
+ * `GET /api/boards/:slug/placement`: where each part sits. A part is the box around its pins' centres
+ * widened by half a pad (netlists hold no pad or body sizes); the outline is the box around all parts.
+ */
+export const boardPlacementSchema = z.object({
+  board: boardSlugSchema,
+  units: z.literal('mm'),
+  outline: boardBoxSchema.nullable(),
+  parts: z.array(
+    boardBoxSchema.extend({
+      refdes: z.string(),
+      kind: componentKindSchema,
+      side: boardSideSchema.nullable(),
+    }),
+  ),
+  /** refdes of parts the netlist gives no position for */
+  unplaced: z.array(z.string()),
+});
+export type BoardPlacement = z.infer<typeof boardPlacementSchema>;

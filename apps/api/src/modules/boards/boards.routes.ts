@@ -23,6 +23,10 @@ export function boardsRouter(service: BoardsService): Router {
     res.json(await service.listComponents(slug, query.net));
   });
 
+  router.get('/boards/:slug/placement', async (req, res) => {
+    res.json(await service.getPlacement(boardSlugSchema.parse(req.params.slug)));
+  });
+
   router.get('/boards/:slug/components/:refdes', async (req, res) => {
     const { slug, refdes } = componentParamsSchema.parse(req.params);
     res.json(await service.getComponent(slug, refdes));

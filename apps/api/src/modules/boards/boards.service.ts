@@ -1,4 +1,5 @@
-import type { BoardDetail, ComponentDetail } from '@railyard/shared';
+import { boardPlacement } from '@railyard/board-analysis';
+import type { BoardDetail, BoardPlacement, ComponentDetail } from '@railyard/shared';
 import { AppError } from '../../lib/app-error';
 import type { BoardsRepository } from './boards.repository';
 import { comparePins } from './pin-order';
@@ -40,6 +41,12 @@ export function createBoardsService(repo: BoardsRepository) {
         net = found.name;
       }
       return { board: board.slug, net, components: await repo.listComponents(board.id, netId) };
+    },
+
+    async getPlacement(slug: string): Promise<BoardPlacement> {
+      const board = await requireBoard(slug);
+      const placement = boardPlacement(await repo.listComponents(board.id, null));
+      return { board: board.slug, units: 'mm', ...placement };
     },
 
     async getComponent(slug: string, refdes: string): Promise<ComponentDetail> {

@@ -11,6 +11,7 @@ import {
   componentQueryOptions,
   useComponent,
 } from '../../features/boards/api/get-component';
+import { BoardPlacementPanel } from '../../features/boards/components/board-placement-map';
 import { ComponentHeader } from '../../features/boards/components/component-header';
 import { ComponentPinsTable } from '../../features/boards/components/component-pins-table';
 import { componentCasesQueryOptions } from '../../features/casebook/api/get-component-cases';
@@ -80,9 +81,14 @@ export default function ComponentRoute() {
           <ComponentPinsTable slug={slug} refdes={refdes} pins={detail.component.pins} />
           <PartPowerLinks slug={slug} refdes={refdes} links={detail.powerLinks} />
         </div>
-        <SectionErrorBoundary title="Could not show the cases" resetKeys={[slug, refdes]}>
-          <ComponentCasesPanel slug={slug} refdes={refdes} />
-        </SectionErrorBoundary>
+        <div className="min-w-0 space-y-3">
+          <SectionErrorBoundary title="Could not draw the board" resetKeys={[slug, refdes]}>
+            <BoardPlacementPanel key={refdes} slug={slug} marked={[refdes]} />
+          </SectionErrorBoundary>
+          <SectionErrorBoundary title="Could not show the cases" resetKeys={[slug, refdes]}>
+            <ComponentCasesPanel slug={slug} refdes={refdes} />
+          </SectionErrorBoundary>
+        </div>
       </div>
     </>
   );

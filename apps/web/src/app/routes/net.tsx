@@ -7,6 +7,7 @@ import { SectionErrorBoundary } from '../../components/errors/error-boundary';
 import { paths } from '../../config/paths';
 import { useSignedInUser } from '../../lib/viewer';
 import { boardQueryOptions, useBoard } from '../../features/boards/api/get-board';
+import { BoardPlacementPanel } from '../../features/boards/components/board-placement-map';
 import { NetCasesPanel } from '../../features/casebook/components/net-cases-panel';
 import { netsQueryOptions } from '../../features/boards/api/get-nets';
 import {
@@ -93,6 +94,14 @@ export default function NetRoute() {
           {/* Keyed by net: a resistance typed for one rail is not carried to the next. */}
           <InjectionCaution key={net.name} nominalVoltage={net.nominalVoltage} />
           <PowerLinksPanel slug={slug} linksIn={detail.linksIn} linksOut={detail.linksOut} />
+          <SectionErrorBoundary title="Could not draw the board" resetKeys={[slug, net.name]}>
+            <BoardPlacementPanel
+              key={net.name}
+              slug={slug}
+              marked={detail.loads.parts.map((part) => part.refdes)}
+              title={`Parts of ${net.name} on the board`}
+            />
+          </SectionErrorBoundary>
         </div>
         {canEdit && (
           <div className="min-w-0 xl:col-span-2">
