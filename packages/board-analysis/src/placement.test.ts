@@ -56,6 +56,11 @@ describe('partBox', () => {
     });
   });
 
+  it('leaves no binary rounding tail on positions read from a netlist', () => {
+    // 1.11 − 0.25 is 0.8600000000000001 in binary floating point
+    expect(partBox(part('C2', [[1.11, 1.11]]))).toEqual({ x0: 0.86, y0: 0.86, x1: 1.36, y1: 1.36 });
+  });
+
   it('ignores pins with half a position and has no box for a part with no position at all', () => {
     expect(
       partBox(

@@ -39,6 +39,14 @@ export interface Placement<Kind extends string = string> {
 /** Half the side of the smallest pad drawn, mm: about the pad of an 0402 chip (FACTS §4: 1.0 × 0.5 mm). */
 export const padMargin = 0.25;
 
+/**
+ * Rounded to 0.0001 mm, finer than any netlist unit (IPC-D-356: 0.001 mm or 0.0001 in = 2.54 µm), so
+ * the sums leave no binary tail such as 0.8600000000000001.
+ */
+function toTenthMicron(mm: number): number {
+  return Math.round(mm * 10_000) / 10_000;
+}
+
 function known(point: { x: number | null; y: number | null }): point is { x: number; y: number } {
   return (
     point.x !== null && point.y !== null && Number.isFinite(point.x) && Number.isFinite(point.y)
@@ -53,10 +61,10 @@ export function partBox(part: PlacementInput): Box | null {
   const xs = points.map((p) => p.x);
   const ys = points.map((p) => p.y);
   return {
-    x0: Math.min(...xs) - padMargin,
-    y0: Math.min(...ys) - padMargin,
-    x1: Math.max(...xs) + padMargin,
-    y1: Math.max(...ys) + padMargin,
+    x0: toTenthMicron(Math.min(...xs) - padMargin),
+    y0: toTenthMicron(Math.min(...ys) - padMargin),
+    x1: toTenthMicron(Math.max(...xs) + padMargin),
+    y1: toTenthMicron(Math.max(...ys) + padMargin),
   };
 }
 
