@@ -8,6 +8,7 @@
 // tracing. Both live and die with the graph they came from. Which id a slug names is kept too, and
 // forgotten on the same notifications: a board's slug does not change, and whatever would delete a
 // board must notify like any other write to it.
+import { gzipSync } from 'node:zlib';
 import etag from 'etag';
 import type pg from 'pg';
 import { createPowerGraph, type PowerGraph } from '@railyard/board-analysis';
@@ -33,6 +34,8 @@ export interface CachedBoard {
  */
 export interface TraceJson {
   bytes: Buffer;
+  /** the same bytes gzipped (RFC 1952), for clients that accept it */
+  gzipped: Buffer;
   etag: string;
 }
 
@@ -49,7 +52,7 @@ function cachedBoard(id: number, graph: PowerGraph, rootNet: string | null): Cac
       const text = serialise();
       const bytes = Buffer.from(text, 'utf8');
       // the package and the weak form Express itself uses for res.send
-      const trace = { bytes, etag: etag(bytes, { weak: true }) };
+      const trace = { bytes, gzipped: gzipSync(bytes), etag: etag(bytes, { weak: true }) };
       if (traces.size >= tracesKeptPerBoard) traces.delete(traces.keys().next().value as string);
       traces.set(key, trace);
       return trace;
