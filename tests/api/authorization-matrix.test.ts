@@ -4,6 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { userRoles, type UserRole } from '@railyard/shared';
 import type { Access } from '../../apps/api/src/middleware/require-role';
+import { importPinList } from '../support/pin-list-board';
 import { createTestApp, uniqueSlug, type TestApp } from '../support/test-app';
 
 interface RouteEntry {
@@ -46,12 +47,7 @@ beforeAll(async () => {
   const admin = await t.agentAs('admin');
   const csv = ['refdes,pin,net', 'J1,1,GND', 'J1,2,VBAT', 'U1,1,VBAT', 'U1,2,VSYS', 'U1,3,GND'].join('\n');
   const links = JSON.stringify({ format: 'railyard-annotations', version: 1, powerLinks: [{ from: 'VBAT', to: 'VSYS', via: 'U1', kind: 'switch' }] });
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('format', 'csv')
-    .attach('netlist', Buffer.from(csv), 'pins.csv')
-    .attach('annotations', Buffer.from(links), 'a.json');
-  expect(res.status).toBe(201);
+  await importPinList(admin, slug, csv, { annotations: links });
   const link = await t.pool.query('SELECT l.id FROM power_links l JOIN boards b ON b.id = l.board_id WHERE b.slug = $1', [slug]);
   samples[':slug'] = slug;
   samples[':net'] = 'VBAT';

@@ -2,6 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PowerTree } from '@railyard/shared';
 import { createTestApp, uniqueSlug, type TestApp } from '../support/test-app';
+import { importPinList } from '../support/pin-list-board';
 
 let t: TestApp;
 let moderator: Awaited<ReturnType<TestApp['agentAs']>>;
@@ -23,12 +24,7 @@ async function smallBoard() {
     'C1,1,VCC_1V8', 'C1,2,GND',
   ].join('\n');
   const links = JSON.stringify({ format: 'railyard-annotations', version: 1, rootNet: 'VBAT', powerLinks: [{ from: 'VBAT', to: 'VSYS', via: 'U1', kind: 'switch' }] });
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('format', 'csv')
-    .attach('netlist', Buffer.from(csv), 'pins.csv')
-    .attach('annotations', Buffer.from(links), 'a.json');
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  await importPinList(admin, slug, csv, { annotations: links });
   return slug;
 }
 

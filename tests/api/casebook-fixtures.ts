@@ -1,6 +1,7 @@
 // Shared set-up of the casebook API tests: a small board of their own and a valid write-up to vary.
 import { expect } from 'vitest';
 import type { CaseDetail } from '@railyard/shared';
+import { importPinList } from '../support/pin-list-board';
 import { uniqueSlug, type TestApp } from '../support/test-app';
 
 type Agent = Awaited<ReturnType<TestApp['agentAs']>>;
@@ -27,12 +28,7 @@ export async function casebookBoard(t: TestApp, prefix = 'cases'): Promise<strin
     nets: [{ name: 'VSYS', kind: 'power', nominalVoltage: 3.85, aliases: ['SYS'] }],
     powerLinks: [{ from: 'VSYS', to: 'VCC_1V8', via: 'U2', kind: 'converter' }],
   });
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('format', 'csv')
-    .attach('netlist', Buffer.from(csv), 'pins.csv')
-    .attach('annotations', Buffer.from(annotations), 'a.json');
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  await importPinList(admin, slug, csv, { annotations });
   return slug;
 }
 

@@ -2,6 +2,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ComponentDetail, NetRow } from '@railyard/shared';
+import { importPinList } from '../support/pin-list-board';
 import { createTestApp, uniqueSlug, type TestApp } from '../support/test-app';
 import { writeCase } from './casebook-fixtures';
 
@@ -59,12 +60,7 @@ beforeAll(async () => {
     })),
     powerLinks: [{ from: 'VSYS', to: 'VCC_1V8', via: 'U1', kind: 'converter' }],
   });
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('format', 'csv')
-    .attach('netlist', Buffer.from(csv), 'pins.csv')
-    .attach('annotations', Buffer.from(annotations), 'a.json');
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  await importPinList(admin, slug, csv, { annotations });
 });
 afterAll(() => t.close());
 

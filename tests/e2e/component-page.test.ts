@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CaseDetail } from '@railyard/shared';
 import { writeCase } from '../api/casebook-fixtures';
 import { launchBrowser, startWebServer } from '../support/browser';
+import { importPinList } from '../support/pin-list-board';
 import { uniqueSlug } from '../support/test-app';
 
 // The reference for pin order: ICU's collation with numeric ordering (ECMA-402 Intl.Collator).
@@ -53,13 +54,7 @@ beforeAll(async () => {
     ],
     powerLinks: [{ from: 'VSYS', to: 'VCC_1V8', via: 'U1', kind: 'converter' }],
   });
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('format', 'csv')
-    .field('board', JSON.stringify({ title: `Part page board ${slug}` }))
-    .attach('netlist', Buffer.from(csv), 'pins.csv')
-    .attach('annotations', Buffer.from(annotations), 'a.json');
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  await importPinList(admin, slug, csv, { annotations, board: { title: `Part page board ${slug}` } });
   const member = await web.agentAs('member');
   written = await writeCase(member, slug, {
     title: 'VSYS short to ground, converter U1 cooked',

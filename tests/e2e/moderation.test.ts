@@ -3,6 +3,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, signInInBrowser, startWebServer } from '../support/browser';
+import { importPinList } from '../support/pin-list-board';
 import { createUser, uniqueSlug } from '../support/test-app';
 
 /**
@@ -39,12 +40,7 @@ const annotations = JSON.stringify({
 async function importBoard(): Promise<string> {
   const slug = uniqueSlug('moderate');
   const admin = await web.agentAs('admin');
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('format', 'csv')
-    .attach('netlist', Buffer.from(pins), 'pins.csv')
-    .attach('annotations', Buffer.from(annotations), 'annotations.json');
-  expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
+  await importPinList(admin, slug, pins, { annotations });
   return slug;
 }
 

@@ -1,6 +1,6 @@
 // A small pin-list board with positions worked by hand, for the placement API and the board drawings.
-import { expect } from 'vitest';
 import type { TestApp } from './test-app';
+import { importPinList } from './pin-list-board';
 
 /** refdes, pin, net, x, y (mm), side: about 40 × 20 mm; H1 has no position. */
 export const placedBoardRows = [
@@ -17,9 +17,5 @@ export const placedBoardRows = [
 export async function importPlacedBoard(app: TestApp, slug: string) {
   const admin = await app.agentAs('admin');
   const csv = ['refdes,pin,net,x,y,side', ...placedBoardRows].join('\n');
-  const res = await admin
-    .post(`/api/boards/${slug}/imports?wait=true`)
-    .field('format', 'csv')
-    .attach('netlist', Buffer.from(csv), 'pins.csv');
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  await importPinList(admin, slug, csv);
 }
