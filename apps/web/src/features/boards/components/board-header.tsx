@@ -8,6 +8,7 @@ import {
   netKindOrder,
   netKindTone,
 } from '../../../components/ui/net-kind-badge';
+import { Count } from '../../../components/ui/count';
 import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
@@ -122,7 +123,7 @@ export function BoardHeader({ board, search, canImport = false }: BoardHeaderPro
         <ul className="flex flex-wrap gap-x-3.5 gap-y-0.5 text-ink-muted">
           {componentKinds.map(([kind, count]) => (
             <li key={kind}>
-              {kind} <span className="font-mono text-ink tabular">{formatCount(count)}</span>
+              {kind} <Count value={count} />
             </li>
           ))}
           {componentKinds.length === 0 && <li>{blank}</li>}

@@ -2,6 +2,7 @@
 import type { ComponentDetail, ComponentKind } from '@railyard/shared';
 import type { ReactNode } from 'react';
 import { BoardItemHeader } from '../../../components/layout/board-item-header';
+import { Count } from '../../../components/ui/count';
 import { formatCount, formatVolts } from '../../../lib/quantity-format';
 
 export function ComponentKindBadge({ kind }: { kind: ComponentKind }) {
@@ -23,8 +24,7 @@ export function CulpritTallyLine({ casebook }: { casebook: ComponentDetail['case
   const { cases, solvedAsCulprit } = casebook;
   return (
     <p className="text-[13px] text-ink-muted">
-      Named in <span className="font-mono text-ink tabular">{formatCount(cases)}</span> published{' '}
-      {cases === 1 ? 'case' : 'cases'}
+      Named in <Count value={cases} /> published {cases === 1 ? 'case' : 'cases'}
       <span className="mx-1.5 text-ink-faint" aria-hidden="true">
         ·
       </span>

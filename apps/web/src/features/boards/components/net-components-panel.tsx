@@ -3,6 +3,7 @@ import { Suspense, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { SectionErrorBoundary } from '../../../components/errors/error-boundary';
 import { Button, LinkButton } from '../../../components/ui/button';
+import { Counted } from '../../../components/ui/count';
 import { Kbd } from '../../../components/ui/kbd';
 import { NetKindBadge } from '../../../components/ui/net-kind-badge';
 import { paths } from '../../../config/paths';
@@ -180,14 +181,8 @@ export function NetComponentsPanel({ slug, net, onClose }: PanelProps) {
           {net.nominalVoltage !== null && (
             <span className="font-mono text-ink">{formatVolts(net.nominalVoltage)}</span>
           )}
-          <span>
-            <span className="font-mono text-ink tabular">{formatCount(net.componentCount)}</span>{' '}
-            {net.componentCount === 1 ? 'component' : 'components'}
-          </span>
-          <span>
-            <span className="font-mono text-ink tabular">{formatCount(net.pinCount)}</span>{' '}
-            {net.pinCount === 1 ? 'pin' : 'pins'}
-          </span>
+          <Counted value={net.componentCount} one="component" many="components" />
+          <Counted value={net.pinCount} one="pin" many="pins" />
         </div>
         {net.aliases.length > 0 && (
           <p className="mt-1.5 text-xs text-ink-muted">

@@ -1,5 +1,6 @@
 import type { NetKind } from '@railyard/shared';
 import { useEffect, useRef } from 'react';
+import { Count } from '../../../components/ui/count';
 import { controlClass } from '../../../components/ui/field';
 import { Kbd } from '../../../components/ui/kbd';
 import {
@@ -118,8 +119,8 @@ export function NetFilterBar({
       </div>
 
       <p className="ml-auto text-[13px] text-ink-muted" aria-live="polite">
-        <span className="font-mono text-ink tabular">{formatCount(matched)}</span> of{' '}
-        <span className="font-mono tabular">{formatCount(total)}</span> nets
+        <Count value={matched} /> of <span className="font-mono tabular">{formatCount(total)}</span>{' '}
+        nets
       </p>
     </div>
   );

@@ -1,8 +1,9 @@
 import type { NetDetail } from '@railyard/shared';
 import type { ReactNode } from 'react';
 import { BoardItemHeader } from '../../../components/layout/board-item-header';
+import { Counted } from '../../../components/ui/count';
 import { NetKindBadge } from '../../../components/ui/net-kind-badge';
-import { formatCount, formatVolts } from '../../../lib/quantity-format';
+import { formatVolts } from '../../../lib/quantity-format';
 import { UpstreamPathNav } from './upstream-path';
 
 type NetHeaderProps = {
@@ -32,14 +33,8 @@ export function NetHeader({ board, detail, search }: NetHeaderProps) {
               root
             </span>
           )}
-          <span>
-            <span className="font-mono text-ink tabular">{formatCount(net.componentCount)}</span>{' '}
-            {net.componentCount === 1 ? 'component' : 'components'}
-          </span>
-          <span>
-            <span className="font-mono text-ink tabular">{formatCount(net.pinCount)}</span>{' '}
-            {net.pinCount === 1 ? 'pin' : 'pins'}
-          </span>
+          <Counted value={net.componentCount} one="component" many="components" />
+          <Counted value={net.pinCount} one="pin" many="pins" />
           {net.aliases.length > 0 && (
             <span>
               also <span className="font-mono text-ink">{net.aliases.join(', ')}</span>

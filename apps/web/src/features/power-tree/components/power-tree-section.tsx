@@ -5,6 +5,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { lazy, Suspense, useCallback, useMemo, useRef, useState } from 'react';
 import { ErrorPanel } from '../../../components/errors/error-panel';
 import { Button } from '../../../components/ui/button';
+import { Count } from '../../../components/ui/count';
 import { ToggleButton } from '../../../components/ui/toggle-button';
 import { formatCount } from '../../../lib/quantity-format';
 import { powerTreeQueryOptions, usePowerTree, type TreeSource } from '../api/get-power-tree';
@@ -300,7 +301,7 @@ export function PowerTreeSection({ slug, detail, onOpenRail }: PowerTreeSectionP
         <PowerTreeLegend cutOff={shape?.tree.nodes.some((node) => node.truncated) ?? false} />
         {shape && (
           <p className="ml-auto text-xs text-ink-muted">
-            <span className="font-mono text-ink tabular">{formatCount(drawn)}</span> of{' '}
+            <Count value={drawn} /> of{' '}
             <span className="font-mono tabular">{formatCount(shape.nodeByNet.size)}</span> rails
             drawn · click a rail to open it, its corner badge to fold it
           </p>

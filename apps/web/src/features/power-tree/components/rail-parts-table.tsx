@@ -12,6 +12,7 @@ import {
 import { Fragment, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
+import { Count } from '../../../components/ui/count';
 import { ariaSort, SortableHeaderLabel } from '../../../components/ui/sort-mark';
 import { paths } from '../../../config/paths';
 import { naturalCompare } from '../../../lib/natural-order';
@@ -143,8 +144,7 @@ function CapacitanceLine({ capacitance }: { capacitance: RailLoads['capacitance'
       <span className="font-mono text-base font-medium text-ink tabular">
         {counted > 0 ? formatFarads(totalFarads) : '—'}
       </span>{' '}
-      over <span className="font-mono text-ink tabular">{formatCount(counted)}</span>{' '}
-      {counted === 1 ? 'capacitor' : 'capacitors'}
+      over <Count value={counted} /> {counted === 1 ? 'capacitor' : 'capacitors'}
       {unparsed.length > 0 && (
         <span className="ml-2 text-caution">
           · {formatCount(unparsed.length)} {unparsed.length === 1 ? 'capacitor' : 'capacitors'} with
@@ -220,7 +220,7 @@ export function RailPartsTable({
           </h2>
           <CapacitanceLine capacitance={loads.capacitance} />
           <p className="ml-auto text-[13px] text-ink-muted" aria-live="polite">
-            <span className="font-mono text-ink tabular">{formatCount(parts.length)}</span> of{' '}
+            <Count value={parts.length} /> of{' '}
             <span className="font-mono tabular">{formatCount(loads.parts.length)}</span> parts
           </p>
         </div>
