@@ -14,16 +14,19 @@ export const controlClass = [
   'aria-[invalid=true]:border-danger disabled:opacity-60',
 ].join(' ');
 
+/** What a field hands its control: the id its label points at, and the ids of its hint and error. */
+export type FieldControl = {
+  id: string;
+  'aria-describedby': string | undefined;
+  'aria-invalid': true | undefined;
+};
+
 type FieldProps = {
   label: string;
   hint?: ReactNode;
   error?: string | undefined;
   optional?: boolean;
-  children: (control: {
-    id: string;
-    'aria-describedby': string | undefined;
-    'aria-invalid': true | undefined;
-  }) => ReactNode;
+  children: (control: FieldControl) => ReactNode;
 };
 
 export function Field({ label, hint, error, optional, children }: FieldProps) {

@@ -12,7 +12,7 @@ import {
   type SupplySetting,
 } from '@railyard/injection-power';
 import { useId, useState, type ReactNode } from 'react';
-import { Field, UnitInput } from '../../../components/ui/field';
+import { Field, UnitInput, type FieldControl } from '../../../components/ui/field';
 import { readMeterValue, type MeterQuantity } from '../../../lib/meter-value';
 import { formatSi, formatVolts } from '../../../lib/quantity-format';
 
@@ -126,20 +126,18 @@ export function InjectionPlanner({ railVolts }: { railVolts: number | null }) {
     }
   }
 
-  const input =
-    (field: Fields, unit: string, placeholder: string) =>
-    (control: Parameters<Parameters<typeof Field>[0]['children']>[0]) => (
-      <UnitInput
-        {...control}
-        unit={unit}
-        inputMode="decimal"
-        autoComplete="off"
-        spellCheck={false}
-        value={text[field]}
-        placeholder={placeholder}
-        onChange={(event) => setText((was) => ({ ...was, [field]: event.target.value }))}
-      />
-    );
+  const input = (field: Fields, unit: string, placeholder: string) => (control: FieldControl) => (
+    <UnitInput
+      {...control}
+      unit={unit}
+      inputMode="decimal"
+      autoComplete="off"
+      spellCheck={false}
+      value={text[field]}
+      placeholder={placeholder}
+      onChange={(event) => setText((was) => ({ ...was, [field]: event.target.value }))}
+    />
+  );
 
   return (
     <section aria-labelledby={headingId} className="mt-2.5 border-t border-caution/30 pt-2.5">
